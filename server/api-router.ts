@@ -1,0 +1,13 @@
+/** The `/api` router: one sub-router per resource, ending in a JSON 404. */
+import { Router } from 'express';
+import type { AppContext } from './app-context';
+import { notFoundHandler } from './http/error-handler';
+import { healthRouter } from './health/health-router';
+
+/** Mounts every resource's router. Features add their line here. */
+export function apiRouter(ctx: AppContext): Router {
+  const router = Router();
+  router.use(healthRouter(ctx));
+  router.use(notFoundHandler);
+  return router;
+}

@@ -1,0 +1,5 @@
+/** The feature seed steps run on a new database after the demo accounts exist. */
+import type { SeedStep } from './seed';
+
+/** Features append their idempotent steps here (demo systems, lessons). */
+export const demoSeedSteps: SeedStep[] = [];
