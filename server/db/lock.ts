@@ -47,7 +47,7 @@ export function lockDataDir(dataDir: string): () => void {
     } catch (error) {
       if ((error as NodeJS.ErrnoException).code !== 'EEXIST') throw error;
       const pid = Number.parseInt(readFileSync(lockPath, 'utf8').trim(), 10);
-      if (Number.isFinite(pid) && pid !== process.pid && isAlive(pid)) {
+      if (Number.isFinite(pid) && (pid === process.pid || isAlive(pid))) {
         throw new DataDirInUseError(dataDir, pid);
       }
       rmSync(lockPath, { force: true });

@@ -2,7 +2,9 @@
  * Test support: a fresh migrated database per test (cloned from the template made in global
  * setup) and an AppContext around it. Used by server and cross-module tests only.
  */
+import { randomBytes } from 'node:crypto';
 import { readFileSync } from 'node:fs';
+import pg from 'pg';
 import { pino } from 'pino';
 import { inject } from 'vitest';
 import type { AppContext } from '../app-context';
@@ -16,12 +18,36 @@ export interface TestContext {
   close(): Promise<void>;
 }
 
-/** Opens a clone of the migrated template database (or a PostgreSQL one when TEST_DATABASE_URL is set). */
+/**
+ * Opens a fresh migrated database: a clone of the PGlite template, or, when TEST_DATABASE_URL
+ * names a PostgreSQL server, a new database created on it for this test and dropped on close.
+ */
 export async function openTestDatabase(): Promise<OpenDatabase> {
-  const url = process.env['TEST_DATABASE_URL'];
-  if (url) return openDatabase({ kind: 'postgres', url });
+  const adminUrl = process.env['TEST_DATABASE_URL'];
+  if (adminUrl) return openFreshPostgres(adminUrl);
   const tar = readFileSync(inject('templateDbPath'));
   return openDatabase({ kind: 'pglite', loadDataDir: new Blob([tar]) });
+}
+
+async function openFreshPostgres(adminUrl: string): Promise<OpenDatabase> {
+  const name = `tw_test_${randomBytes(6).toString('hex')}`;
+  const admin = new pg.Client({ connectionString: adminUrl });
+  await admin.connect();
+  await admin.query(`create database ${name}`);
+  await admin.end();
+  const url = new URL(adminUrl);
+  url.pathname = `/${name}`;
+  const open = await openDatabase({ kind: 'postgres', url: url.toString() });
+  return {
+    ...open,
+    close: async () => {
+      await open.close();
+      const dropper = new pg.Client({ connectionString: adminUrl });
+      await dropper.connect();
+      await dropper.query(`drop database if exists ${name} with (force)`);
+      await dropper.end();
+    },
+  };
 }
 
 /** Builds an AppContext over a fresh test database. */
