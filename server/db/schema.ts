@@ -142,3 +142,145 @@ export const runs = pgTable(
   },
   (t) => [index('runs_system_idx').on(t.systemId, t.createdAt)],
 );
+
+/** An uploaded CSV of logged levels or a stopwatch log, with its parsed series. */
+export const measurements = pgTable(
+  'measurements',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    systemId: uuid('system_id')
+      .notNull()
+      .references(() => systems.id, { onDelete: 'cascade' }),
+    createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+    kind: varchar('kind', { length: 16 }).notNull(),
+    name: varchar('name', { length: 200 }).notNull(),
+    originalFilename: varchar('original_filename', { length: 255 }),
+    original: bytea('original'),
+    options: jsonb('options'),
+    series: jsonb('series'),
+    rejected: jsonb('rejected'),
+    stopwatch: jsonb('stopwatch'),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('measurements_system_idx').on(t.systemId)],
+);
+
+/** One calibration fit of a system's coefficients against measurements (history; the latest applied is on systems.calibration). */
+export const calibrations = pgTable(
+  'calibrations',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    systemId: uuid('system_id')
+      .notNull()
+      .references(() => systems.id, { onDelete: 'cascade' }),
+    createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+    measurementIds: jsonb('measurement_ids').notNull(),
+    parameters: jsonb('parameters').notNull(),
+    fit: jsonb('fit').notNull(),
+    applied: boolean('applied').notNull().default(false),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index('calibrations_system_idx').on(t.systemId)],
+);
+
+/** A parameter sweep (operating window) over a system, with its grid of results. */
+export const sweeps = pgTable(
+  'sweeps',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    systemId: uuid('system_id')
+      .notNull()
+      .references(() => systems.id, { onDelete: 'cascade' }),
+    createdBy: uuid('created_by').references(() => users.id, { onDelete: 'set null' }),
+    status: varchar('status', { length: 16 }).notNull(),
+    parameters: jsonb('parameters').notNull(),
+    scenario: jsonb('scenario').notNull(),
+    cellsTotal: integer('cells_total').notNull(),
+    cellsDone: integer('cells_done').notNull().default(0),
+    cells: jsonb('cells'),
+    error: text('error'),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    finishedAt: timestamp('finished_at', { withTimezone: true }),
+  },
+  (t) => [index('sweeps_system_idx').on(t.systemId, t.createdAt)],
+);
+
+/** A class an instructor teaches. */
+export const classes = pgTable('classes', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  instructorId: uuid('instructor_id')
+    .notNull()
+    .references(() => users.id, { onDelete: 'cascade' }),
+  name: varchar('name', { length: 200 }).notNull(),
+  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+});
+
+/** A student in a class. */
+export const classMembers = pgTable(
+  'class_members',
+  {
+    classId: uuid('class_id')
+      .notNull()
+      .references(() => classes.id, { onDelete: 'cascade' }),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    joinedAt: timestamp('joined_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [primaryKey({ columns: [t.classId, t.userId] })],
+);
+
+/** An e-mailed invitation to a class; the token is stored as its SHA-256 hash. */
+export const classInvitations = pgTable(
+  'class_invitations',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    classId: uuid('class_id')
+      .notNull()
+      .references(() => classes.id, { onDelete: 'cascade' }),
+    email: varchar('email', { length: 254 }).notNull(),
+    tokenHash: varchar('token_hash', { length: 64 }).notNull(),
+    expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+    acceptedAt: timestamp('accepted_at', { withTimezone: true }),
+    acceptedBy: uuid('accepted_by').references(() => users.id, { onDelete: 'set null' }),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex('class_invitations_token_unique').on(t.tokenHash)],
+);
+
+/** A lesson: a system snapshot plus questions; in an instructor's library or published to a class. */
+export const lessons = pgTable('lessons', {
+  id: uuid('id').primaryKey().defaultRandom(),
+  ownerId: uuid('owner_id')
+    .notNull()
+    .references(() => users.id, { onDelete: 'cascade' }),
+  classId: uuid('class_id').references(() => classes.id, { onDelete: 'cascade' }),
+  title: varchar('title', { length: 200 }).notNull(),
+  introduction: text('introduction').notNull().default(''),
+  scenario: jsonb('scenario').notNull(),
+  questions: jsonb('questions').notNull(),
+  published: boolean('published').notNull().default(false),
+  revealed: boolean('revealed').notNull().default(false),
+  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+  updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+});
+
+/** A student's predictions for a lesson, and the simulated values once they ran it. */
+export const lessonAnswers = pgTable(
+  'lesson_answers',
+  {
+    id: uuid('id').primaryKey().defaultRandom(),
+    lessonId: uuid('lesson_id')
+      .notNull()
+      .references(() => lessons.id, { onDelete: 'cascade' }),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+    answers: jsonb('answers').notNull(),
+    results: jsonb('results'),
+    runId: uuid('run_id').references(() => runs.id, { onDelete: 'set null' }),
+    submittedAt: timestamp('submitted_at', { withTimezone: true }).notNull().defaultNow(),
+    ranAt: timestamp('ran_at', { withTimezone: true }),
+  },
+  (t) => [uniqueIndex('lesson_answers_unique').on(t.lessonId, t.userId)],
+);
