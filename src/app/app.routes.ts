@@ -1,0 +1,37 @@
+import type { Routes } from '@angular/router';
+import { roleGuard, signedOutGuard } from './core/auth/role-guard';
+
+/** Loads the sign-in page, which is also the home page of a signed-out visitor. */
+const loadSignIn = () => import('./features/auth/sign-in').then((m) => m.SignIn);
+
+/** Top-level routes; every feature is lazy and guarded by role where it needs one. */
+export const routes: Routes = [
+  { path: '', pathMatch: 'full', canActivate: [signedOutGuard], loadComponent: loadSignIn, title: 'Tidewright' },
+  { path: 'sign-in', canActivate: [signedOutGuard], loadComponent: loadSignIn, title: 'Sign in · Tidewright' },
+  {
+    path: 'systems',
+    canMatch: [roleGuard()],
+    loadChildren: () => import('./features/systems/systems.routes').then((m) => m.systemsRoutes),
+  },
+  {
+    // Any signed-in user: students reach their classes here; only staff see it in the menu.
+    path: 'classes',
+    canMatch: [roleGuard()],
+    loadChildren: () => import('./features/classes/classes.routes').then((m) => m.classesRoutes),
+  },
+  {
+    path: 'admin',
+    canMatch: [roleGuard('admin')],
+    loadChildren: () => import('./features/admin/admin.routes').then((m) => m.adminRoutes),
+  },
+  {
+    path: 'safety',
+    loadComponent: () => import('./ui/safety-cautions/safety-cautions').then((m) => m.SafetyCautions),
+    title: 'Safety cautions · Tidewright',
+  },
+  {
+    path: '**',
+    loadComponent: () => import('./core/not-found/not-found').then((m) => m.NotFound),
+    title: 'Not found · Tidewright',
+  },
+];
