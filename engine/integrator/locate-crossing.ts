@@ -1,0 +1,41 @@
+/**
+ * Finds where a continuous function crosses from positive to zero-or-negative inside a bracket,
+ * by the Illinois variant of regula falsi with a bisection safeguard (Dowell & Jarratt, BIT 11,
+ * 1971, 168–174). Requires gLo > 0 and gHi ≤ 0. Shrinks the bracket until its width is at most
+ * `toleranceS` and returns its right end, where g ≤ 0 holds: the event is then certainly past.
+ * Terminates after at most ~200 iterations even for a tolerance below the floating-point spacing.
+ */
+export function locateCrossing(
+  g: (timeS: number) => number,
+  loStartS: number,
+  hiStartS: number,
+  gLoStart: number,
+  gHiStart: number,
+  toleranceS: number,
+): number {
+  let lo = loStartS;
+  let hi = hiStartS;
+  let gLo = gLoStart;
+  let gHi = gHiStart;
+  let lastSide = 0;
+  for (let iteration = 0; iteration < 200 && hi - lo > toleranceS; iteration += 1) {
+    let t = hi - (gHi * (hi - lo)) / (gHi - gLo);
+    const useBisection = iteration % 4 === 3 || !(t > lo && t < hi);
+    if (useBisection) t = 0.5 * (lo + hi);
+    if (t <= lo || t >= hi) break;
+    const gt = g(t);
+    if (Number.isNaN(gt)) return hi;
+    if (gt > 0) {
+      lo = t;
+      gLo = gt;
+      if (lastSide === 1) gHi *= 0.5;
+      lastSide = 1;
+    } else {
+      hi = t;
+      gHi = gt;
+      if (lastSide === -1) gLo *= 0.5;
+      lastSide = -1;
+    }
+  }
+  return hi;
+}
