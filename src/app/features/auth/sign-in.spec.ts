@@ -1,0 +1,119 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { Router, provideRouter } from '@angular/router';
+import { SignIn } from './sign-in';
+
+async function renderSignIn(returnUrl?: string) {
+  TestBed.configureTestingModule({
+    imports: [SignIn],
+    providers: [provideRouter([]), provideHttpClient(), provideHttpClientTesting()],
+  });
+  const fixture = TestBed.createComponent(SignIn);
+  if (returnUrl) fixture.componentRef.setInput('returnUrl', returnUrl);
+  await fixture.whenStable();
+  const root = fixture.nativeElement as HTMLElement;
+  const http = TestBed.inject(HttpTestingController);
+  const router = TestBed.inject(Router);
+  return { fixture, root, http, router };
+}
+
+function type(root: HTMLElement, selector: string, value: string): void {
+  const input = root.querySelector<HTMLInputElement>(selector);
+  if (!input) throw new Error(`No input ${selector} in the sign-in form.`);
+  input.value = value;
+  input.dispatchEvent(new Event('input'));
+  input.dispatchEvent(new Event('blur'));
+}
+
+function submit(root: HTMLElement): void {
+  root.querySelector<HTMLFormElement>('form')?.dispatchEvent(new Event('submit'));
+}
+
+/** Lets the awaited HTTP calls inside `submit()` continue. */
+const settle = () => new Promise((resolve) => setTimeout(resolve));
+
+describe('SignIn', () => {
+  it('shows the product name and both fields', async () => {
+    const { root } = await renderSignIn();
+    expect(root.querySelector('h1')?.textContent).toBe('Tidewright');
+    expect(root.querySelector('input[type=email]')).not.toBeNull();
+    expect(root.querySelector('input[type=password]')).not.toBeNull();
+  });
+
+  it('shows a field error for an invalid e-mail and sends nothing', async () => {
+    const { fixture, root, http } = await renderSignIn();
+    type(root, 'input[type=email]', 'not-an-address');
+    type(root, 'input[type=password]', 'secret-pass');
+    submit(root);
+    await fixture.whenStable();
+    const errors = [...root.querySelectorAll('mat-error')].map((e) => e.textContent?.trim());
+    expect(errors).toEqual(['Enter an e-mail address in the form name@example.org.']);
+    http.expectNone('/api/auth/login');
+  });
+
+  it('asks for both fields when the form is sent empty', async () => {
+    const { fixture, root } = await renderSignIn();
+    submit(root);
+    await fixture.whenStable();
+    const errors = [...root.querySelectorAll('mat-error')].map((e) => e.textContent?.trim());
+    expect(errors).toEqual(['Enter the e-mail address of your account.', 'Enter your password.']);
+  });
+
+  it("shows the server's message when the password is refused", async () => {
+    const { fixture, root, http } = await renderSignIn();
+    type(root, 'input[type=email]', 'ada@example.org');
+    type(root, 'input[type=password]', 'wrong-pass');
+    submit(root);
+    const login = http.expectOne('/api/auth/login');
+    expect(login.request.body).toEqual({ email: 'ada@example.org', password: 'wrong-pass' });
+    login.flush(
+      { error: { code: 'BAD_CREDENTIALS', message: 'E-mail or password is not right.' } },
+      { status: 401, statusText: 'Unauthorized' },
+    );
+    await settle();
+    await fixture.whenStable();
+    expect(root.querySelector('[role=alert]')?.textContent).toContain('E-mail or password is not right.');
+  });
+
+  it('says the server did not answer when the network fails', async () => {
+    const { fixture, root, http } = await renderSignIn();
+    type(root, 'input[type=email]', 'ada@example.org');
+    type(root, 'input[type=password]', 'any-pass');
+    submit(root);
+    http.expectOne('/api/auth/login').error(new ProgressEvent('error'), { status: 0 });
+    await settle();
+    await fixture.whenStable();
+    expect(root.querySelector('[role=alert]')?.textContent).toContain('server did not answer');
+  });
+
+  it('goes to the return URL after signing in', async () => {
+    const { root, http, router } = await renderSignIn('/admin/users');
+    const navigate = vi.spyOn(router, 'navigateByUrl').mockResolvedValue(true);
+    type(root, 'input[type=email]', 'ada@example.org');
+    type(root, 'input[type=password]', 'right-pass');
+    submit(root);
+    http.expectOne('/api/auth/login').flush({ ok: true });
+    await settle();
+    http
+      .expectOne('/api/auth/me')
+      .flush({ id: 'u-1', name: 'Ada', email: 'ada@example.org', role: 'admin', units: 'metric' });
+    await settle();
+    expect(navigate).toHaveBeenCalledWith('/admin/users');
+  });
+
+  it('ignores a return URL that leaves the site', async () => {
+    const { root, http, router } = await renderSignIn('//elsewhere.example/steal');
+    const navigate = vi.spyOn(router, 'navigateByUrl').mockResolvedValue(true);
+    type(root, 'input[type=email]', 'ada@example.org');
+    type(root, 'input[type=password]', 'right-pass');
+    submit(root);
+    http.expectOne('/api/auth/login').flush({ ok: true });
+    await settle();
+    http
+      .expectOne('/api/auth/me')
+      .flush({ user: { id: 'u-1', name: 'Ada', email: 'ada@example.org', role: 'member', units: 'us' } });
+    await settle();
+    expect(navigate).toHaveBeenCalledWith('/systems');
+  });
+});
