@@ -6,8 +6,19 @@ const loadSignIn = () => import('./features/auth/sign-in').then((m) => m.SignIn)
 
 /** Top-level routes; every feature is lazy and guarded by role where it needs one. */
 export const routes: Routes = [
-  { path: '', pathMatch: 'full', canActivate: [signedOutGuard], loadComponent: loadSignIn, title: 'Tidewright' },
-  { path: 'sign-in', canActivate: [signedOutGuard], loadComponent: loadSignIn, title: 'Sign in · Tidewright' },
+  {
+    path: '',
+    pathMatch: 'full',
+    canActivate: [signedOutGuard],
+    loadComponent: loadSignIn,
+    title: 'Tidewright',
+  },
+  {
+    path: 'sign-in',
+    canActivate: [signedOutGuard],
+    loadComponent: loadSignIn,
+    title: 'Sign in · Tidewright',
+  },
   {
     path: 'systems',
     canMatch: [roleGuard()],
@@ -26,7 +37,8 @@ export const routes: Routes = [
   },
   {
     path: 'safety',
-    loadComponent: () => import('./ui/safety-cautions/safety-cautions').then((m) => m.SafetyCautions),
+    loadComponent: () =>
+      import('./ui/safety-cautions/safety-cautions').then((m) => m.SafetyCautions),
     title: 'Safety cautions · Tidewright',
   },
   {

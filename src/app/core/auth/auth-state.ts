@@ -60,7 +60,8 @@ export class AuthState {
     if (user) return { status: 'signed-in', user };
     return {
       status: 'rejected',
-      message: 'The server accepted the password but did not keep the session. Allow cookies for this site and try again.',
+      message:
+        'The server accepted the password but did not keep the session. Allow cookies for this site and try again.',
     };
   }
 

@@ -1,11 +1,11 @@
-import { Component } from '@angular/core';
+import { ChangeDetectionStrategy, Component } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { Router, provideRouter } from '@angular/router';
 import { AuthState } from './auth-state';
 import type { AuthUser, UserRole } from './auth-user';
 import { roleGuard, signedOutGuard } from './role-guard';
 
-@Component({ template: 'page' })
+@Component({ template: 'page', changeDetection: ChangeDetectionStrategy.OnPush })
 class Page {}
 
 function setUp(user: AuthUser | null): { router: Router } {

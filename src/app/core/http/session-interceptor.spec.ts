@@ -15,7 +15,11 @@ function setUp() {
   });
   const router = TestBed.inject(Router);
   const navigate = vi.spyOn(router, 'navigateByUrl').mockResolvedValue(true);
-  return { http: TestBed.inject(HttpClient), backend: TestBed.inject(HttpTestingController), navigate };
+  return {
+    http: TestBed.inject(HttpClient),
+    backend: TestBed.inject(HttpTestingController),
+    navigate,
+  };
 }
 
 describe('sessionInterceptor', () => {

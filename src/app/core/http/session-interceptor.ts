@@ -24,7 +24,11 @@ export const sessionInterceptor: HttpInterceptorFn = (request, next) => {
   const path = request.url.split('?')[0] ?? request.url;
   return next(request.clone({ withCredentials: true })).pipe(
     catchError((error: unknown) => {
-      if (error instanceof HttpErrorResponse && error.status === 401 && !ANSWERING_401.includes(path)) {
+      if (
+        error instanceof HttpErrorResponse &&
+        error.status === 401 &&
+        !ANSWERING_401.includes(path)
+      ) {
         injector.get(AuthState).forget();
         void router.navigateByUrl(signInRedirect(router, router.url));
       }

@@ -8,7 +8,9 @@ import { RouterLink } from '@angular/router';
   imports: [MatButtonModule, RouterLink],
   template: `
     <h1>Nothing here</h1>
-    <p>This address does not match a Tidewright page. It may have moved, or the link is cut short.</p>
+    <p>
+      This address does not match a Tidewright page. It may have moved, or the link is cut short.
+    </p>
     <a mat-flat-button routerLink="/">Go to the start page</a>
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -19,14 +19,20 @@ async function renderShell(user: AuthUser | null): Promise<HTMLElement> {
   const http = TestBed.inject(HttpTestingController);
   const me = http.expectOne('/api/auth/me');
   if (user) me.flush(user);
-  else me.flush({ error: { code: 'UNAUTHENTICATED', message: 'Sign in first.' } }, { status: 401, statusText: 'Unauthorized' });
+  else
+    me.flush(
+      { error: { code: 'UNAUTHENTICATED', message: 'Sign in first.' } },
+      { status: 401, statusText: 'Unauthorized' },
+    );
   await fixture.whenStable();
   http.verify();
   return fixture.nativeElement as HTMLElement;
 }
 
 function navLabels(root: HTMLElement): string[] {
-  return [...root.querySelectorAll('nav a')].map((link) => link.textContent?.replace(/\s+/g, ' ').trim() ?? '');
+  return [...root.querySelectorAll('nav a')].map(
+    (link) => link.textContent?.replace(/\s+/g, ' ').trim() ?? '',
+  );
 }
 
 describe('Shell', () => {
@@ -34,7 +40,11 @@ describe('Shell', () => {
 
   it('shows Systems, Classes and Admin to an admin', async () => {
     const root = await renderShell(userWithRole('admin'));
-    expect(navLabels(root).map((label) => label.split(' ').pop())).toEqual(['Systems', 'Classes', 'Admin']);
+    expect(navLabels(root).map((label) => label.split(' ').pop())).toEqual([
+      'Systems',
+      'Classes',
+      'Admin',
+    ]);
   });
 
   it('hides Admin but shows Classes to an instructor', async () => {

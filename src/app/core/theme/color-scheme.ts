@@ -36,7 +36,9 @@ export class ColorScheme {
   private initialScheme(): SchemeName {
     const saved = this.storage()?.getItem(STORAGE_KEY);
     if (saved === 'light' || saved === 'dark') return saved;
-    const prefersDark = this.document.defaultView?.matchMedia?.('(prefers-color-scheme: dark)').matches;
+    const prefersDark = this.document.defaultView?.matchMedia?.(
+      '(prefers-color-scheme: dark)',
+    ).matches;
     return prefersDark ? 'dark' : 'light';
   }
 

@@ -73,7 +73,9 @@ describe('SignIn', () => {
     );
     await settle();
     await fixture.whenStable();
-    expect(root.querySelector('[role=alert]')?.textContent).toContain('E-mail or password is not right.');
+    expect(root.querySelector('[role=alert]')?.textContent).toContain(
+      'E-mail or password is not right.',
+    );
   });
 
   it('says the server did not answer when the network fails', async () => {
@@ -112,7 +114,9 @@ describe('SignIn', () => {
     await settle();
     http
       .expectOne('/api/auth/me')
-      .flush({ user: { id: 'u-1', name: 'Ada', email: 'ada@example.org', role: 'member', units: 'us' } });
+      .flush({
+        user: { id: 'u-1', name: 'Ada', email: 'ada@example.org', role: 'member', units: 'us' },
+      });
     await settle();
     expect(navigate).toHaveBeenCalledWith('/systems');
   });

@@ -40,7 +40,10 @@ export class SignIn {
   readonly returnUrl = input<string | undefined>(undefined);
 
   protected readonly form = new FormGroup({
-    email: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.email] }),
+    email: new FormControl('', {
+      nonNullable: true,
+      validators: [Validators.required, Validators.email],
+    }),
     password: new FormControl('', { nonNullable: true, validators: [Validators.required] }),
   });
   protected readonly busy = signal(false);
