@@ -3,11 +3,15 @@ import { Router } from 'express';
 import type { AppContext } from './app-context';
 import { notFoundHandler } from './http/error-handler';
 import { healthRouter } from './health/health-router';
+import { authRouter } from './auth/auth-router';
+import { adminRouter } from './admin/admin-router';
 
 /** Mounts every resource's router. Features add their line here. */
 export function apiRouter(ctx: AppContext): Router {
   const router = Router();
   router.use(healthRouter(ctx));
+  router.use(authRouter(ctx));
+  router.use(adminRouter(ctx));
   router.use(notFoundHandler);
   return router;
 }

@@ -2,6 +2,8 @@
 import type { Logger } from 'pino';
 import type { Config } from './config';
 import type { Database } from './db/database';
+import type { AuthSettings } from './auth/auth-settings';
+import type { Mailer } from './mail/mailer';
 
 /** Dependencies shared by every router. Features add their services here. */
 export interface AppContext {
@@ -10,4 +12,8 @@ export interface AppContext {
   config: Config;
   logger: Logger;
   version: string;
+  /** Sessions, password hashing, reset links and rate limits. */
+  auth: AuthSettings;
+  /** Sends e-mail (password reset, class invitations). */
+  mailer: Mailer;
 }

@@ -7,12 +7,15 @@ import { pinoHttp } from 'pino-http';
 import type { AppContext } from './app-context';
 import { apiRouter } from './api-router';
 import { errorHandler } from './http/error-handler';
+import { csrfProtection } from './http/csrf';
+import { sessionMiddleware } from './session/session-middleware';
+import { trustProxySetting } from './session/trust-proxy-setting';
 
 /** Builds the app: security headers, logging, JSON API under /api, then the built Angular app. */
 export function createApp(ctx: AppContext): Express {
   const app = express();
   app.disable('x-powered-by');
-  if (ctx.config.trustProxy) app.set('trust proxy', ctx.config.trustProxy);
+  if (ctx.config.trustProxy) app.set('trust proxy', trustProxySetting(ctx.config.trustProxy));
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -31,7 +34,13 @@ export function createApp(ctx: AppContext): Express {
     }),
   );
   app.use(pinoHttp({ logger: ctx.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
-  app.use('/api', express.json({ limit: '1mb' }), apiRouter(ctx));
+  app.use(
+    '/api',
+    express.json({ limit: '1mb' }),
+    ...sessionMiddleware(ctx),
+    csrfProtection(ctx.auth.sessionSecret),
+    apiRouter(ctx),
+  );
   const staticDir = ctx.config.staticDir;
   if (existsSync(join(staticDir, 'index.html'))) {
     app.use(express.static(staticDir, { index: false, maxAge: '1h' }));

@@ -6,6 +6,13 @@ import { openDatabase } from './db/database';
 import { seedDemo } from './db/seed';
 import { demoSeedSteps } from './db/demo-seed-steps';
 import { readVersion } from './version';
+import { authSettingsFromConfig } from './auth/auth-settings';
+import { startMail } from './mail/start-mail';
+import { DrizzleSessionStore } from './session/drizzle-session-store';
+import { resolveSessionSecret } from './session/session-secret';
+
+/** Expired sessions are deleted this often. */
+const SESSION_PRUNE_INTERVAL_MS = 15 * 60_000;
 
 async function main(): Promise<void> {
   const config = loadConfig();
@@ -17,7 +24,14 @@ async function main(): Promise<void> {
     await seedDemo(database.db, demoSeedSteps);
     logger.info('demo data seeded');
   }
-  const ctx = { db: database.db, dbKind: database.kind, config, logger, version: readVersion() };
+  const auth = authSettingsFromConfig(config, resolveSessionSecret(config));
+  const mail = await startMail(config, database.db, auth.mailFrom, logger);
+  const ctx = { db: database.db, dbKind: database.kind, config, logger, version: readVersion(), auth, mailer: mail.mailer };
+  const sessionStore = new DrizzleSessionStore(database.db);
+  const pruneTimer = setInterval(() => {
+    sessionStore.prune().catch((error: unknown) => logger.warn({ err: error }, 'could not prune sessions'));
+  }, SESSION_PRUNE_INTERVAL_MS);
+  pruneTimer.unref();
   const app = createApp(ctx);
   const server = app.listen(config.port, config.host, () => {
     logger.info(`Tidewright listening on http://localhost:${config.port} (${database.kind})`);
@@ -29,7 +43,12 @@ async function main(): Promise<void> {
     logger.info(`${signal}: shutting down`);
     server.close();
     server.closeAllConnections();
-    void database.close().finally(() => process.exit(0));
+    clearInterval(pruneTimer);
+    void mail
+      .close()
+      .catch(() => undefined)
+      .then(() => database.close())
+      .finally(() => process.exit(0));
   };
   process.on('SIGTERM', () => stop('SIGTERM'));
   process.on('SIGINT', () => stop('SIGINT'));

@@ -112,6 +112,11 @@ export const PasswordResetRequestSchema = z.strictObject({ email: EmailSchema })
 /** A reset request. */
 export type PasswordResetRequest = z.infer<typeof PasswordResetRequestSchema>;
 
+/** The 202 answer to a reset request: the same words whether or not the address has an account. */
+export const PasswordResetAcceptedSchema = z.object({ message: z.string() });
+/** `{message}`. */
+export type PasswordResetAccepted = z.infer<typeof PasswordResetAcceptedSchema>;
+
 /** `POST /api/auth/password-reset/confirm`: the token from the e-mailed link and the new password. */
 export const PasswordResetConfirmSchema = z.strictObject({
   token: z.string().min(20, 'The reset link is incomplete; open it again from the e-mail.').max(200),
