@@ -28,34 +28,60 @@ function checkVesselRules(vessel: VesselFields, index: number): RuleIssue[] {
   const issues: RuleIssue[] = [];
   const at = (...path: (string | number)[]) => ['vessels', index, ...path];
   if (vessel.initialLevel > vessel.height) {
-    issues.push({ path: at('initialLevel'), message: `The initial level must be within the vessel (at most its height, ${vessel.height} m).` });
+    issues.push({
+      path: at('initialLevel'),
+      message: `The initial level must be within the vessel (at most its height, ${vessel.height} m).`,
+    });
   }
   if (vessel.minLevel !== undefined && vessel.minLevel >= vessel.height) {
-    issues.push({ path: at('minLevel'), message: `The minimum level must be below the vessel's height (${vessel.height} m).` });
+    issues.push({
+      path: at('minLevel'),
+      message: `The minimum level must be below the vessel's height (${vessel.height} m).`,
+    });
   }
   if (vessel.overflow !== undefined) {
     const { elevation } = vessel.overflow;
     if (elevation <= vessel.floorElevation || elevation > vessel.floorElevation + vessel.height) {
-      issues.push({ path: at('overflow', 'elevation'), message: 'The overflow must sit above the vessel floor and no higher than its rim (elevations are above the datum).' });
+      issues.push({
+        path: at('overflow', 'elevation'),
+        message:
+          'The overflow must sit above the vessel floor and no higher than its rim (elevations are above the datum).',
+      });
     }
   }
   issues.push(...checkShapeRules(vessel.shape, at));
-  if (vessel.kind === 'bed' && vessel.media?.depth !== undefined && vessel.media.depth > vessel.height) {
-    issues.push({ path: at('media', 'depth'), message: `The media depth must not exceed the bed's height (${vessel.height} m).` });
+  if (
+    vessel.kind === 'bed' &&
+    vessel.media?.depth !== undefined &&
+    vessel.media.depth > vessel.height
+  ) {
+    issues.push({
+      path: at('media', 'depth'),
+      message: `The media depth must not exceed the bed's height (${vessel.height} m).`,
+    });
   }
   return issues;
 }
 
-function checkShapeRules(shape: ShapeFields, at: (...path: (string | number)[]) => (string | number)[]): RuleIssue[] {
+function checkShapeRules(
+  shape: ShapeFields,
+  at: (...path: (string | number)[]) => (string | number)[],
+): RuleIssue[] {
   if (shape.type !== 'table') return [];
   const issues: RuleIssue[] = [];
   if (shape.points[0]?.level !== 0) {
-    issues.push({ path: at('shape', 'points', 0, 'level'), message: 'A level-to-area table starts at level 0 (the floor).' });
+    issues.push({
+      path: at('shape', 'points', 0, 'level'),
+      message: 'A level-to-area table starts at level 0 (the floor).',
+    });
   }
   shape.points.forEach((point, index) => {
     const previous = shape.points[index - 1];
     if (previous !== undefined && point.level <= previous.level) {
-      issues.push({ path: at('shape', 'points', index, 'level'), message: 'Table levels must increase from one point to the next.' });
+      issues.push({
+        path: at('shape', 'points', index, 'level'),
+        message: 'Table levels must increase from one point to the next.',
+      });
     }
   });
   return issues;
@@ -70,17 +96,29 @@ function checkLevelRules(fields: ScenarioFields): RuleIssue[] {
   fields.leaks.forEach((leak, index) => {
     const vessel = findVessel(fields, leak.from);
     if (vessel === undefined) return;
-    if (leak.elevation < vessel.floorElevation || leak.elevation > vessel.floorElevation + vessel.height) {
-      issues.push({ path: ['leaks', index, 'elevation'], message: `The leak must be on the wall of "${vessel.id}", between its floor and rim (elevations are above the datum).` });
+    if (
+      leak.elevation < vessel.floorElevation ||
+      leak.elevation > vessel.floorElevation + vessel.height
+    ) {
+      issues.push({
+        path: ['leaks', index, 'elevation'],
+        message: `The leak must be on the wall of "${vessel.id}", between its floor and rim (elevations are above the datum).`,
+      });
     }
   });
   fields.controls.forEach((control, index) => {
     const vessel = findVessel(fields, control.vessel);
     if (control.restartAbove <= control.stopBelow) {
-      issues.push({ path: ['controls', index, 'restartAbove'], message: 'The restart level must be above the stop level, so the switch cannot chatter.' });
+      issues.push({
+        path: ['controls', index, 'restartAbove'],
+        message: 'The restart level must be above the stop level, so the switch cannot chatter.',
+      });
     }
     if (vessel !== undefined && control.restartAbove >= vessel.height) {
-      issues.push({ path: ['controls', index, 'restartAbove'], message: `The restart level must be below the height of "${vessel.id}".` });
+      issues.push({
+        path: ['controls', index, 'restartAbove'],
+        message: `The restart level must be below the height of "${vessel.id}".`,
+      });
     }
   });
   return issues;
@@ -90,11 +128,21 @@ function checkSettingRules(fields: ScenarioFields): RuleIssue[] {
   const issues: RuleIssue[] = [];
   const temperature = fields.water?.temperature;
   if (temperature !== undefined && (temperature <= 0 || temperature > MAX_WATER_TEMPERATURE_C)) {
-    issues.push({ path: ['water', 'temperature'], message: `The water temperature must be between 0 and ${MAX_WATER_TEMPERATURE_C} degC.` });
+    issues.push({
+      path: ['water', 'temperature'],
+      message: `The water temperature must be between 0 and ${MAX_WATER_TEMPERATURE_C} degC.`,
+    });
   }
   const run = fields.run;
-  if (run?.duration !== undefined && run.outputInterval !== undefined && run.outputInterval > run.duration) {
-    issues.push({ path: ['run', 'outputInterval'], message: 'The output interval must not be longer than the run.' });
+  if (
+    run?.duration !== undefined &&
+    run.outputInterval !== undefined &&
+    run.outputInterval > run.duration
+  ) {
+    issues.push({
+      path: ['run', 'outputInterval'],
+      message: 'The output interval must not be longer than the run.',
+    });
   }
   return issues;
 }

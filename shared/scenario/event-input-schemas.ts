@@ -35,8 +35,16 @@ export const ControlInputSchema = z.strictObject({
 
 /** A what-if fault: a drain partly blocked, or a worn pump whose flow is scaled down. */
 export const FaultInputSchema = z.discriminatedUnion('kind', [
-  z.strictObject({ kind: z.literal('drain-blocked'), bed: z.string().min(1), fraction: z.number().min(0).lt(1) }),
-  z.strictObject({ kind: z.literal('pump-worn'), pump: z.string().min(1), flowScale: z.number().positive().max(1) }),
+  z.strictObject({
+    kind: z.literal('drain-blocked'),
+    bed: z.string().min(1),
+    fraction: z.number().min(0).lt(1),
+  }),
+  z.strictObject({
+    kind: z.literal('pump-worn'),
+    pump: z.string().min(1),
+    flowScale: z.number().positive().max(1),
+  }),
 ]);
 
 /** How to run the simulation. */

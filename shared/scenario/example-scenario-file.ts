@@ -55,7 +55,12 @@ export const EXAMPLE_SCENARIO_FILE: ScenarioFile = {
           to: 'bed-a',
           elevation: '1.2 m',
           valveOpening: 1,
-          pipe: { length: '1.5 m', innerDiameter: '15.8 mm', material: 'pvc', fittings: { elbow90: 3 } },
+          pipe: {
+            length: '1.5 m',
+            innerDiameter: '15.8 mm',
+            material: 'pvc',
+            fittings: { elbow90: 3 },
+          },
         },
       ],
     },

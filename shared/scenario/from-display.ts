@@ -14,7 +14,9 @@ export function fromDisplay(value: number, unit: string, dimension: Dimension): 
   if (unit.trim() === '') return value;
   const result = parseQuantity(`${value} ${unit}`, dimension, '');
   if (!result.success) {
-    throw new DisplayUnitError(`"${unit}" is not a unit of ${DIMENSION_INFO[dimension].noun}; ${result.issue.message}`);
+    throw new DisplayUnitError(
+      `"${unit}" is not a unit of ${DIMENSION_INFO[dimension].noun}; ${result.issue.message}`,
+    );
   }
   return result.value;
 }

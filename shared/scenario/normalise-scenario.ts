@@ -51,7 +51,10 @@ function normaliseDrain(drain: BedFields['drain']): Drain {
       type: 'standpipe',
       ...common,
       ...(weep !== undefined && {
-        weepHole: { diameter: weep.diameter, dischargeCoefficient: weep.dischargeCoefficient ?? D.orificeDischargeCoefficient },
+        weepHole: {
+          diameter: weep.diameter,
+          dischargeCoefficient: weep.dischargeCoefficient ?? D.orificeDischargeCoefficient,
+        },
       }),
     };
   }
@@ -106,7 +109,9 @@ function normalisePump(pump: PumpFields): Pump {
   const parabola = pump.curveKind === 'parabola' || pump.curve === undefined;
   const maxHead = pump.maxHead ?? 0;
   const maxFlow = pump.maxFlow ?? 0;
-  const curve = parabola ? parabolaCurve(maxHead, maxFlow) : [...(pump.curve ?? [])].sort((a, b) => a.flow - b.flow);
+  const curve = parabola
+    ? parabolaCurve(maxHead, maxFlow)
+    : [...(pump.curve ?? [])].sort((a, b) => a.flow - b.flow);
   return {
     id: pump.id,
     in: pump.in,
@@ -137,7 +142,10 @@ export function normaliseScenario(fields: ScenarioFields): Scenario {
     water: { temperature: fields.water?.temperature ?? D.waterTemperatureC },
     vessels: fields.vessels.map(normaliseVessel),
     pumps: fields.pumps.map(normalisePump),
-    leaks: fields.leaks.map((leak) => ({ ...leak, dischargeCoefficient: leak.dischargeCoefficient ?? D.orificeDischargeCoefficient })),
+    leaks: fields.leaks.map((leak) => ({
+      ...leak,
+      dischargeCoefficient: leak.dischargeCoefficient ?? D.orificeDischargeCoefficient,
+    })),
     schedule,
     controls: fields.controls,
     faults: fields.faults,

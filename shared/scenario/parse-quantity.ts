@@ -5,8 +5,7 @@ import { unitMath } from './unit-math';
 
 /** The outcome of reading one dimensional value: its SI number, or an issue naming the field. */
 export type QuantityResult =
-  | { success: true; value: number }
-  | { success: false; issue: ScenarioIssue };
+  { success: true; value: number } | { success: false; issue: ScenarioIssue };
 
 const DIMENSION_ORDER: readonly Dimension[] = [
   'length',
@@ -51,7 +50,9 @@ function readUnitString(text: string): Unit | undefined {
  */
 export function parseQuantity(value: unknown, dimension: Dimension, path: string): QuantityResult {
   if (typeof value === 'number') {
-    return Number.isFinite(value) ? { success: true, value } : failure(path, dimension, String(value));
+    return Number.isFinite(value)
+      ? { success: true, value }
+      : failure(path, dimension, String(value));
   }
   if (typeof value !== 'string') return failure(path, dimension, describeValue(value));
   const unit = readUnitString(value);
@@ -65,7 +66,9 @@ export function parseQuantity(value: unknown, dimension: Dimension, path: string
   }
   // 15 significant digits drop the binary noise of the conversion (26.6 mm → 0.0266, not ...02).
   const si = Number(unit.toNumber(info.siUnit).toPrecision(15));
-  return Number.isFinite(si) ? { success: true, value: si } : failure(path, dimension, `"${value}"`);
+  return Number.isFinite(si)
+    ? { success: true, value: si }
+    : failure(path, dimension, `"${value}"`);
 }
 
 function describeValue(value: unknown): string {

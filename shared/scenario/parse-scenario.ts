@@ -5,8 +5,7 @@ import { formatIssuePath, type ScenarioIssue } from './scenario-issue';
 
 /** The outcome of reading a scenario document. */
 export type ParseScenarioResult =
-  | { success: true; scenario: Scenario }
-  | { success: false; issues: ScenarioIssue[] };
+  { success: true; scenario: Scenario } | { success: false; issues: ScenarioIssue[] };
 
 /**
  * Validates any value as a scenario file and returns the normalised scenario (SI numbers, all
@@ -16,7 +15,10 @@ export type ParseScenarioResult =
 export function parseScenario(input: unknown): ParseScenarioResult {
   const parsed = ScenarioInputSchema.safeParse(input);
   if (!parsed.success) {
-    const issues = parsed.error.issues.map((issue) => ({ path: formatIssuePath(issue.path), message: issue.message }));
+    const issues = parsed.error.issues.map((issue) => ({
+      path: formatIssuePath(issue.path),
+      message: issue.message,
+    }));
     return { success: false, issues };
   }
   return { success: true, scenario: normaliseScenario(parsed.data) };

@@ -1,7 +1,10 @@
 import { z } from 'zod';
 import { quantitySchema } from './quantity-schema';
 
-const fittingCount = z.number().int({ error: 'A fitting count must be a whole number.' }).nonnegative();
+const fittingCount = z
+  .number()
+  .int({ error: 'A fitting count must be a whole number.' })
+  .nonnegative();
 
 /** Counts of fittings on one pipe, by kind; missing kinds count zero. */
 export const FittingsInputSchema = z.strictObject({

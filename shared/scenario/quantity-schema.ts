@@ -16,7 +16,9 @@ export function quantitySchema(dimension: Dimension, bound: QuantityBound = 'pos
     ctx.addIssue({ code: 'custom', message: result.issue.message });
     return z.NEVER;
   });
-  if (bound === 'positive') return parsed.pipe(z.number().positive({ error: 'Must be greater than zero.' }));
-  if (bound === 'nonnegative') return parsed.pipe(z.number().nonnegative({ error: 'Must not be negative.' }));
+  if (bound === 'positive')
+    return parsed.pipe(z.number().positive({ error: 'Must be greater than zero.' }));
+  if (bound === 'nonnegative')
+    return parsed.pipe(z.number().nonnegative({ error: 'Must not be negative.' }));
   return parsed.pipe(z.number());
 }

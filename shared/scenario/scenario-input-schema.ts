@@ -17,7 +17,9 @@ export const ScenarioFieldsSchema = z.strictObject({
   format: z.literal('scenario/1', { error: 'The format must be "scenario/1".' }),
   name: z.string().min(1, { error: 'Give the scenario a name.' }),
   description: z.string().optional(),
-  water: z.strictObject({ temperature: quantitySchema('temperature', 'any').optional() }).optional(),
+  water: z
+    .strictObject({ temperature: quantitySchema('temperature', 'any').optional() })
+    .optional(),
   vessels: z.array(VesselInputSchema).min(1, { error: 'A scenario needs at least one vessel.' }),
   pumps: z.array(PumpInputSchema).default([]),
   leaks: z.array(LeakInputSchema).default([]),

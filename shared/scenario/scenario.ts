@@ -202,8 +202,7 @@ export interface Leak {
 
 /** A timed pump switch, or all pumps' power off/on, at `at` seconds. */
 export type ScheduleEntry =
-  | { at: number; pump: string; state: 'on' | 'off' }
-  | { at: number; power: 'on' | 'off' };
+  { at: number; pump: string; state: 'on' | 'off' } | { at: number; power: 'on' | 'off' };
 
 /** A float switch (levels m above the vessel floor). */
 export interface FloatSwitchControl {

@@ -2,7 +2,8 @@ import { create, createUnitDependencies, unitDependencies, type FactoryFunctionM
 
 /** mathjs's typings mark dependency maps as possibly undefined; fail loudly if one is missing. */
 function dependencyMap(map: FactoryFunctionMap | undefined, name: string): FactoryFunctionMap {
-  if (map === undefined) throw new Error(`mathjs does not export ${name}; check the mathjs version.`);
+  if (map === undefined)
+    throw new Error(`mathjs does not export ${name}; check the mathjs version.`);
   return map;
 }
 

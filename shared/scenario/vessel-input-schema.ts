@@ -7,7 +7,11 @@ const diameter = quantitySchema('diameter');
 
 /** Plan shape of a vessel: a box, an upright cylinder, or a table of level → plan area. */
 export const ShapeInputSchema = z.discriminatedUnion('type', [
-  z.strictObject({ type: z.literal('box'), length: quantitySchema('length'), width: quantitySchema('length') }),
+  z.strictObject({
+    type: z.literal('box'),
+    length: quantitySchema('length'),
+    width: quantitySchema('length'),
+  }),
   z.strictObject({ type: z.literal('cylinder'), diameter: quantitySchema('length') }),
   z.strictObject({
     type: z.literal('table'),
@@ -65,7 +69,9 @@ export const DrainInputSchema = z.discriminatedUnion('type', [
     type: z.literal('standpipe'),
     ...drainCommon,
     standpipe: StandpipeInputSchema,
-    weepHole: z.strictObject({ diameter, dischargeCoefficient: DischargeCoefficientSchema.optional() }).optional(),
+    weepHole: z
+      .strictObject({ diameter, dischargeCoefficient: DischargeCoefficientSchema.optional() })
+      .optional(),
   }),
 ]);
 
@@ -77,7 +83,10 @@ export const MediaInputSchema = z.strictObject({
 });
 
 const vesselCommon = {
-  id: z.string().min(1).refine((id) => id !== 'out', { error: '"out" is reserved for water leaving the system.' }),
+  id: z
+    .string()
+    .min(1)
+    .refine((id) => id !== 'out', { error: '"out" is reserved for water leaving the system.' }),
   shape: ShapeInputSchema,
   floorElevation: quantitySchema('length', 'any').default(0),
   height: quantitySchema('length'),
@@ -90,5 +99,10 @@ const vesselCommon = {
 export const VesselInputSchema = z.discriminatedUnion('kind', [
   z.strictObject({ kind: z.literal('tank'), ...vesselCommon }),
   z.strictObject({ kind: z.literal('sump'), ...vesselCommon }),
-  z.strictObject({ kind: z.literal('bed'), ...vesselCommon, media: MediaInputSchema.optional(), drain: DrainInputSchema }),
+  z.strictObject({
+    kind: z.literal('bed'),
+    ...vesselCommon,
+    media: MediaInputSchema.optional(),
+    drain: DrainInputSchema,
+  }),
 ]);
