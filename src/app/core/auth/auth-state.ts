@@ -3,11 +3,12 @@ import { HttpClient, HttpErrorResponse } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import { readApiError } from '../http/read-api-error';
-import { type AuthUser, type UserRole, parseAuthUser } from './auth-user';
+import type { User, UserRole } from '../../../../shared/contracts/auth';
+import { readMeResponse } from './read-me-response';
 
 /** What `signIn` ends with: the user, or a message the sign-in form can show as it is. */
 export type SignInResult =
-  | { readonly status: 'signed-in'; readonly user: AuthUser }
+  | { readonly status: 'signed-in'; readonly user: User }
   | { readonly status: 'rejected'; readonly message: string };
 
 /**
@@ -17,9 +18,9 @@ export type SignInResult =
 @Injectable({ providedIn: 'root' })
 export class AuthState {
   private readonly http = inject(HttpClient);
-  private readonly current = signal<AuthUser | null>(null);
+  private readonly current = signal<User | null>(null);
   private readonly settled = signal(false);
-  private firstLoad: Promise<AuthUser | null> | null = null;
+  private firstLoad: Promise<User | null> | null = null;
 
   /** The signed-in user, or null. */
   readonly user = this.current.asReadonly();
@@ -29,16 +30,16 @@ export class AuthState {
   readonly role = computed<UserRole | null>(() => this.current()?.role ?? null);
 
   /** Resolves with the user once the session is known; asks the server only the first time. */
-  ready(): Promise<AuthUser | null> {
+  ready(): Promise<User | null> {
     this.firstLoad ??= this.refresh();
     return this.firstLoad;
   }
 
   /** Asks the server who is signed in; a 401 (or no server) means nobody. */
-  async refresh(): Promise<AuthUser | null> {
+  async refresh(): Promise<User | null> {
     try {
       const body = await firstValueFrom(this.http.get<unknown>('/api/auth/me'));
-      this.current.set(parseAuthUser(body));
+      this.current.set(readMeResponse(body));
     } catch (error: unknown) {
       if (!(error instanceof HttpErrorResponse)) throw error;
       this.current.set(null);
@@ -48,21 +49,23 @@ export class AuthState {
     return this.current();
   }
 
-  /** Signs in with e-mail and password; failures come back as a message, never as a throw. */
+  /**
+   * Signs in with e-mail and password; failures come back as a message, never as a throw. Waits
+   * for the first session look-up, whose answer also sets the XSRF-TOKEN cookie the POST echoes.
+   */
   async signIn(email: string, password: string): Promise<SignInResult> {
+    await this.ready();
+    let body: unknown;
     try {
-      await firstValueFrom(this.http.post<unknown>('/api/auth/login', { email, password }));
+      body = await firstValueFrom(this.http.post<unknown>('/api/auth/login', { email, password }));
     } catch (error: unknown) {
       if (!(error instanceof HttpErrorResponse)) throw error;
       return { status: 'rejected', message: signInFailureMessage(error) };
     }
-    const user = await this.refresh();
-    if (user) return { status: 'signed-in', user };
-    return {
-      status: 'rejected',
-      message:
-        'The server accepted the password but did not keep the session. Allow cookies for this site and try again.',
-    };
+    const user = readMeResponse(body);
+    this.current.set(user);
+    this.settled.set(true);
+    return { status: 'signed-in', user };
   }
 
   /** Ends the session on the server; the tab counts as signed out whatever the server answers. */

@@ -2,13 +2,13 @@ import { ChangeDetectionStrategy, Component } from '@angular/core';
 import { TestBed } from '@angular/core/testing';
 import { Router, provideRouter } from '@angular/router';
 import { AuthState } from './auth-state';
-import type { AuthUser, UserRole } from './auth-user';
+import type { User, UserRole } from '../../../../shared/contracts/auth';
 import { roleGuard, signedOutGuard } from './role-guard';
 
 @Component({ template: 'page', changeDetection: ChangeDetectionStrategy.OnPush })
 class Page {}
 
-function setUp(user: AuthUser | null): { router: Router } {
+function setUp(user: User | null): { router: Router } {
   TestBed.configureTestingModule({
     providers: [
       // The guards only ask whether the session is known and who it belongs to.
@@ -25,7 +25,7 @@ function setUp(user: AuthUser | null): { router: Router } {
   return { router: TestBed.inject(Router) };
 }
 
-function user(role: UserRole): AuthUser {
+function user(role: UserRole): User {
   return { id: 'u-2', name: 'Bo', email: 'bo@example.org', role, units: 'metric' };
 }
 

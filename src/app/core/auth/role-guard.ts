@@ -8,7 +8,7 @@ import {
   type UrlTree,
 } from '@angular/router';
 import { AuthState } from './auth-state';
-import type { UserRole } from './auth-user';
+import type { UserRole } from '../../../../shared/contracts/auth';
 
 /**
  * A guard for `canMatch` or `canActivate`: signed-out visitors go to `/sign-in?returnUrl=…`,

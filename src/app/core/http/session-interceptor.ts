@@ -7,10 +7,10 @@ import { AuthState } from '../auth/auth-state';
 import { signInRedirect } from '../auth/role-guard';
 
 /**
- * Calls whose 401 is an answer, not an expired session: "who am I" when signed out, and a wrong
- * password at login.
+ * Calls whose 401 is an answer, not an expired session: "who am I" when signed out, a wrong
+ * password at login, and signing out of a session that already ended.
  */
-const ANSWERING_401 = ['/api/auth/me', '/api/auth/login'];
+const ANSWERING_401 = ['/api/auth/me', '/api/auth/login', '/api/auth/logout'];
 
 /**
  * Adds `withCredentials` to `/api` requests; on a 401 from any other API call, forgets the user

@@ -2,15 +2,15 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
-import type { AuthUser, UserRole } from '../auth/auth-user';
+import type { User, UserRole } from '../../../../shared/contracts/auth';
 import { Shell } from './shell';
 
-function userWithRole(role: UserRole): AuthUser {
+function userWithRole(role: UserRole): User {
   return { id: 'u-1', name: 'Ada Rivers', email: 'ada@example.org', role, units: 'metric' };
 }
 
 /** Renders the shell after `/api/auth/me` answered with `user` (or 401 when null). */
-async function renderShell(user: AuthUser | null): Promise<HTMLElement> {
+async function renderShell(user: User | null): Promise<HTMLElement> {
   TestBed.configureTestingModule({
     imports: [Shell],
     providers: [provideRouter([]), provideHttpClient(), provideHttpClientTesting()],
@@ -18,7 +18,7 @@ async function renderShell(user: AuthUser | null): Promise<HTMLElement> {
   const fixture = TestBed.createComponent(Shell);
   const http = TestBed.inject(HttpTestingController);
   const me = http.expectOne('/api/auth/me');
-  if (user) me.flush(user);
+  if (user) me.flush({ user });
   else
     me.flush(
       { error: { code: 'UNAUTHENTICATED', message: 'Sign in first.' } },

@@ -5,7 +5,7 @@ import { MatMenuModule } from '@angular/material/menu';
 import { MatToolbarModule } from '@angular/material/toolbar';
 import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
 import { AuthState } from '../auth/auth-state';
-import type { UserRole } from '../auth/auth-user';
+import type { UserRole } from '../../../../shared/contracts/auth';
 import { ColorScheme } from '../theme/color-scheme';
 import { BrandMark } from './brand-mark';
 

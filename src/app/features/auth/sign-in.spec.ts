@@ -2,6 +2,8 @@ import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
 import { Router, provideRouter } from '@angular/router';
+import type { User } from '../../../../shared/contracts/auth';
+import { AuthState } from '../../core/auth/auth-state';
 import { SignIn } from './sign-in';
 
 async function renderSignIn(returnUrl?: string) {
@@ -9,11 +11,15 @@ async function renderSignIn(returnUrl?: string) {
     imports: [SignIn],
     providers: [provideRouter([]), provideHttpClient(), provideHttpClientTesting()],
   });
+  const http = TestBed.inject(HttpTestingController);
+  // The visitor is signed out: the shell's first session look-up answered 401.
+  const sessionKnown = TestBed.inject(AuthState).ready();
+  http.expectOne('/api/auth/me').flush(null, { status: 401, statusText: 'Unauthorized' });
+  await sessionKnown;
   const fixture = TestBed.createComponent(SignIn);
   if (returnUrl) fixture.componentRef.setInput('returnUrl', returnUrl);
   await fixture.whenStable();
   const root = fixture.nativeElement as HTMLElement;
-  const http = TestBed.inject(HttpTestingController);
   const router = TestBed.inject(Router);
   return { fixture, root, http, router };
 }
@@ -29,6 +35,14 @@ function type(root: HTMLElement, selector: string, value: string): void {
 function submit(root: HTMLElement): void {
   root.querySelector<HTMLFormElement>('form')?.dispatchEvent(new Event('submit'));
 }
+
+const signedInUser: User = {
+  id: 'u-1',
+  name: 'Ada Rivers',
+  email: 'ada@example.org',
+  role: 'admin',
+  units: 'metric',
+};
 
 /** Lets the awaited HTTP calls inside `submit()` continue. */
 const settle = () => new Promise((resolve) => setTimeout(resolve));
@@ -65,6 +79,7 @@ describe('SignIn', () => {
     type(root, 'input[type=email]', 'ada@example.org');
     type(root, 'input[type=password]', 'wrong-pass');
     submit(root);
+    await settle();
     const login = http.expectOne('/api/auth/login');
     expect(login.request.body).toEqual({ email: 'ada@example.org', password: 'wrong-pass' });
     login.flush(
@@ -83,24 +98,23 @@ describe('SignIn', () => {
     type(root, 'input[type=email]', 'ada@example.org');
     type(root, 'input[type=password]', 'any-pass');
     submit(root);
+    await settle();
     http.expectOne('/api/auth/login').error(new ProgressEvent('error'), { status: 0 });
     await settle();
     await fixture.whenStable();
     expect(root.querySelector('[role=alert]')?.textContent).toContain('server did not answer');
   });
 
-  it('goes to the return URL after signing in', async () => {
+  it('signs in and goes to the return URL', async () => {
     const { root, http, router } = await renderSignIn('/admin/users');
     const navigate = vi.spyOn(router, 'navigateByUrl').mockResolvedValue(true);
     type(root, 'input[type=email]', 'ada@example.org');
     type(root, 'input[type=password]', 'right-pass');
     submit(root);
-    http.expectOne('/api/auth/login').flush({ ok: true });
     await settle();
-    http
-      .expectOne('/api/auth/me')
-      .flush({ id: 'u-1', name: 'Ada', email: 'ada@example.org', role: 'admin', units: 'metric' });
+    http.expectOne('/api/auth/login').flush({ user: signedInUser });
     await settle();
+    expect(TestBed.inject(AuthState).user()).toEqual(signedInUser);
     expect(navigate).toHaveBeenCalledWith('/admin/users');
   });
 
@@ -110,13 +124,8 @@ describe('SignIn', () => {
     type(root, 'input[type=email]', 'ada@example.org');
     type(root, 'input[type=password]', 'right-pass');
     submit(root);
-    http.expectOne('/api/auth/login').flush({ ok: true });
     await settle();
-    http
-      .expectOne('/api/auth/me')
-      .flush({
-        user: { id: 'u-1', name: 'Ada', email: 'ada@example.org', role: 'member', units: 'us' },
-      });
+    http.expectOne('/api/auth/login').flush({ user: signedInUser });
     await settle();
     expect(navigate).toHaveBeenCalledWith('/systems');
   });
