@@ -284,3 +284,31 @@ export const RunComparisonSchema = z.object({
 });
 /** A comparison of two runs. */
 export type RunComparison = z.infer<typeof RunComparisonSchema>;
+
+/**
+ * `GET /api/runs/:id/result.json` (a download): the run, the normalised scenario it ran (all SI,
+ * defaults filled, `run.duration` = the duration used) and its whole result including the series.
+ */
+export const RunResultFileSchema = z.object({
+  format: z.literal('tidewright-run/1'),
+  run: RunSchema.pick({
+    id: true,
+    systemId: true,
+    systemVersion: true,
+    status: true,
+    durationS: true,
+    verdict: true,
+    error: true,
+    createdAt: true,
+    finishedAt: true,
+  }),
+  scenario: z.record(z.string(), z.unknown()),
+  summary: RunSummarySchema.nullable(),
+  events: z.array(RunEventSchema).nullable(),
+  verdicts: z.array(VerdictSchema).nullable(),
+  massBalanceError: z.number().nullable(),
+  stats: RunStatsSchema.nullable(),
+  series: RunSeriesSchema.nullable(),
+});
+/** The downloadable result of a run. */
+export type RunResultFile = z.infer<typeof RunResultFileSchema>;

@@ -7,6 +7,7 @@
  * scenario field (prefixed `scenario.` when the scenario is nested in the request body).
  */
 import { z } from 'zod';
+import { EmailSchema } from './auth';
 
 /** A scenario document in the file format (validated on the server by `parseScenario`). */
 export const ScenarioDocumentSchema = z.record(z.string(), z.unknown());
@@ -35,13 +36,17 @@ export const SystemNameSchema = z
   .min(1, { error: 'Give the system a name.' })
   .max(200, { error: 'Use at most 200 characters.' });
 
-/** One row of `GET /api/systems`. `pumpSummary` reads e.g. "1 pump, 2400 L/h max". */
+/**
+ * One row of `GET /api/systems`. `pumpSummary` reads e.g. "1 pump, up to 2000 L/h";
+ * `pumpsMaxFlowM3PerS` is the sum of the pumps' free-flow maxima (m³/s) for display in other units.
+ */
 export const SystemListItemSchema = z.object({
   id: z.uuid(),
   name: z.string(),
   bedsCount: z.number().int().nonnegative(),
   pumpsCount: z.number().int().nonnegative(),
   pumpSummary: z.string(),
+  pumpsMaxFlowM3PerS: z.number().nullable(),
   /** Worst verdict status of the latest completed run; null before any run. */
   lastVerdict: VerdictStatusSchema.nullable(),
   ownerName: z.string(),
@@ -56,7 +61,10 @@ export const SystemListSchema = z.object({ items: z.array(SystemListItemSchema) 
 /** The systems table. */
 export type SystemList = z.infer<typeof SystemListSchema>;
 
-/** `GET /api/systems/:id` and the body of every create/save answer. */
+/**
+ * `GET /api/systems/:id` and the body of every create/save answer. The scenario's `name` always
+ * equals the system's `name` (the server writes it on every save).
+ */
 export const SystemSchema = z.object({
   id: z.uuid(),
   name: z.string(),
@@ -119,7 +127,7 @@ export const ImportSystemQuerySchema = z.object({ name: SystemNameSchema.optiona
 
 /** `POST /api/systems/:id/shares` body (owner only). Sharing again changes the access. */
 export const ShareRequestSchema = z.strictObject({
-  email: z.email({ error: 'Enter an e-mail address.' }).max(254),
+  email: EmailSchema,
   access: z.enum(['viewer', 'editor']),
 });
 /** `POST /api/systems/:id/shares` body. */
