@@ -54,5 +54,6 @@ describe('AuthState', () => {
     http.expectOne('/api/auth/logout').flush(null, { status: 500, statusText: 'Server Error' });
     await done;
     expect(auth.user()).toBeNull();
+    expect(await auth.ready()).toBeNull();
   });
 });

@@ -29,10 +29,14 @@ export class AuthState {
   /** The signed-in user's role, or null when signed out. */
   readonly role = computed<UserRole | null>(() => this.current()?.role ?? null);
 
-  /** Resolves with the user once the session is known; asks the server only the first time. */
-  ready(): Promise<User | null> {
+  /**
+   * Resolves with the current user once the session is known; asks the server only the first
+   * time, and afterwards reflects sign-in, sign-out and `forget()`.
+   */
+  async ready(): Promise<User | null> {
     this.firstLoad ??= this.refresh();
-    return this.firstLoad;
+    await this.firstLoad;
+    return this.current();
   }
 
   /** Asks the server who is signed in; a 401 (or no server) means nobody. */
