@@ -5,6 +5,8 @@ import { notFoundHandler } from './http/error-handler';
 import { healthRouter } from './health/health-router';
 import { authRouter } from './auth/auth-router';
 import { adminRouter } from './admin/admin-router';
+import { systemsRouter } from './systems/systems-router';
+import { runsRouter } from './runs/runs-router';
 
 /** Mounts every resource's router. Features add their line here. */
 export function apiRouter(ctx: AppContext): Router {
@@ -12,6 +14,8 @@ export function apiRouter(ctx: AppContext): Router {
   router.use(healthRouter(ctx));
   router.use(authRouter(ctx));
   router.use(adminRouter(ctx));
+  router.use(systemsRouter(ctx));
+  router.use(runsRouter(ctx));
   router.use(notFoundHandler);
   return router;
 }

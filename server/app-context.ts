@@ -4,6 +4,7 @@ import type { Config } from './config';
 import type { Database } from './db/database';
 import type { AuthSettings } from './auth/auth-settings';
 import type { Mailer } from './mail/mailer';
+import type { RunPool } from './runs/run-pool';
 
 /** Dependencies shared by every router. Features add their services here. */
 export interface AppContext {
@@ -16,4 +17,9 @@ export interface AppContext {
   auth: AuthSettings;
   /** Sends e-mail (password reset, class invitations). */
   mailer: Mailer;
+  /**
+   * Worker threads that run simulations (main.ts makes it and closes it on shutdown). When absent,
+   * the runs feature makes one for this context on first use.
+   */
+  runPool?: RunPool;
 }
