@@ -20,9 +20,9 @@ export function adminRouter(ctx: AppContext): Router {
     res.json({ users: await listUsers(ctx) } satisfies AdminUserList);
   });
 
-  router.patch('/admin/users/:id', adminOnly, async (req, res) => {
+  router.patch('/admin/users/:userId', adminOnly, async (req, res) => {
     const patch = parseOr400(AdminUserPatchSchema, req.body);
-    const user = await patchUser(ctx, currentUser(req), String(req.params['id']), patch);
+    const user = await patchUser(ctx, currentUser(req), String(req.params['userId']), patch);
     res.json({ user } satisfies AdminUserResponse);
   });
 

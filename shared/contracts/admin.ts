@@ -15,7 +15,7 @@ export const AdminUserListSchema = z.object({ users: z.array(AdminUserSchema) })
 /** The admin users table. */
 export type AdminUserList = z.infer<typeof AdminUserListSchema>;
 
-/** `PATCH /api/admin/users/:id`: change a role or disable/enable an account. */
+/** `PATCH /api/admin/users/:userId`: change a role or disable/enable an account. */
 export const AdminUserPatchSchema = z
   .strictObject({
     role: UserRoleSchema.optional(),
