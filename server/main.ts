@@ -10,6 +10,8 @@ import { authSettingsFromConfig } from './auth/auth-settings';
 import { startMail } from './mail/start-mail';
 import { DrizzleSessionStore } from './session/drizzle-session-store';
 import { resolveSessionSecret } from './session/session-secret';
+import { defaultRunPoolOptions, RunPool } from './runs/run-pool';
+import { failInterruptedRuns } from './runs/runs-repository';
 
 /** Expired sessions are deleted this often. */
 const SESSION_PRUNE_INTERVAL_MS = 15 * 60_000;
@@ -26,7 +28,10 @@ async function main(): Promise<void> {
   }
   const auth = authSettingsFromConfig(config, resolveSessionSecret(config));
   const mail = await startMail(config, database.db, auth.mailFrom, logger);
-  const ctx = { db: database.db, dbKind: database.kind, config, logger, version: readVersion(), auth, mailer: mail.mailer };
+  const interrupted = await failInterruptedRuns(database.db, 'The server stopped during this run; run it again.');
+  if (interrupted > 0) logger.warn(`${interrupted} run(s) left over from the last start were marked failed`);
+  const runPool = new RunPool(defaultRunPoolOptions());
+  const ctx = { db: database.db, dbKind: database.kind, config, logger, version: readVersion(), auth, mailer: mail.mailer, runPool };
   const sessionStore = new DrizzleSessionStore(database.db);
   const pruneTimer = setInterval(() => {
     sessionStore.prune().catch((error: unknown) => logger.warn({ err: error }, 'could not prune sessions'));
@@ -44,8 +49,9 @@ async function main(): Promise<void> {
     server.close();
     server.closeAllConnections();
     clearInterval(pruneTimer);
-    void mail
+    void runPool
       .close()
+      .then(() => mail.close())
       .catch(() => undefined)
       .then(() => database.close())
       .finally(() => process.exit(0));
