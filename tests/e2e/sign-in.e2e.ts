@@ -1,6 +1,10 @@
+import { mkdirSync } from 'node:fs';
+import { join } from 'node:path';
 import { expect, test } from '@playwright/test';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../../server/db/seed';
 import { watchPage } from './page-watch';
+
+const artifacts = join(import.meta.dirname, 'artifacts');
 
 function demoAccount(role: 'admin' | 'member') {
   const account = DEMO_ACCOUNTS.find((candidate) => candidate.role === role);
@@ -46,6 +50,8 @@ test('an admin signs in, sees Admin in the menu, is sent home from / and signs o
   const nav = page.getByRole('navigation', { name: 'Main' });
   await expect(nav.getByRole('link')).toHaveText([/Systems/, /Classes/, /Admin/]);
   await expect(page.locator('mat-toolbar')).toContainText(admin.name);
+  mkdirSync(artifacts, { recursive: true });
+  await page.screenshot({ path: join(artifacts, 'signed-in.png') });
 
   await page.goto('/');
   await expect(page).toHaveURL(/\/systems$/);
