@@ -4,7 +4,7 @@ import type { Routes } from '@angular/router';
 export const systemsRoutes: Routes = [
   {
     path: '',
-    loadComponent: () => import('./systems-page').then((m) => m.SystemsPage),
+    loadComponent: () => import('./system-list/system-list').then((m) => m.SystemList),
     title: 'Systems · Tidewright',
   },
 ];
