@@ -71,10 +71,17 @@ interface PoolWorker {
   current?: Pending;
 }
 
-/** Starts a run worker: a tiny eval bootstrap loads tsx's API, which imports the TypeScript entry. */
-function spawnRunWorker(): Worker {
+/** The worker entry that runs the engine. */
+const RUN_WORKER_ENTRY = new URL('./run-worker.ts', import.meta.url);
+
+/**
+ * Starts a worker thread on a TypeScript entry: a tiny eval bootstrap loads tsx's API, which
+ * imports the entry (works under `node --import tsx`, tsx and vitest alike; Node 20 does not apply
+ * `--import` hooks to a worker's own entry file).
+ */
+function spawnRunWorker(entryUrl: URL): Worker {
   const api = import.meta.resolve('tsx/esm/api');
-  const entry = new URL('./run-worker.ts', import.meta.url).href;
+  const entry = entryUrl.href;
   const code = `import(${JSON.stringify(api)}).then((m) => m.tsImport(${JSON.stringify(entry)}, ${JSON.stringify(entry)}));`;
   return new Worker(code, { eval: true, execArgv: [] });
 }
@@ -97,7 +104,11 @@ export class RunPool {
   private readonly ending = new Map<string, Promise<void>>();
   private closed = false;
 
-  constructor(readonly options: RunPoolOptions) {}
+  /** `workerEntry` is the worker's module (the engine runner; tests pass a scripted one). */
+  constructor(
+    readonly options: RunPoolOptions,
+    private readonly workerEntry: URL = RUN_WORKER_ENTRY,
+  ) {}
 
   /**
    * Queues a job. The promise settles once the job's `onEnd` has stored its outcome (it rejects
@@ -217,7 +228,7 @@ export class RunPool {
   }
 
   private addWorker(): void {
-    const worker: PoolWorker = { thread: spawnRunWorker(), ready: false };
+    const worker: PoolWorker = { thread: spawnRunWorker(this.workerEntry), ready: false };
     this.workers.push(worker);
     worker.thread.on('message', (message: RunWorkerMessage) => this.onMessage(worker, message));
     worker.thread.on('error', (error) => this.onCrash(worker, error.message));
