@@ -80,7 +80,9 @@ function collectBodies(part: MimePart, found: { text: string | null; html: strin
   const mediaType = (type.split(';')[0] ?? '').trim().toLowerCase();
   const boundary = headerParam(type, 'boundary');
   if (mediaType.startsWith('multipart/') && boundary && depth < 5) {
-    const sections = part.body.split(`--${boundary}`).slice(1);
+    // The line break before a boundary belongs to the delimiter, not to the part (RFC 2046 §5.1.1).
+    const escaped = boundary.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+    const sections = part.body.split(new RegExp(`(?:^|\\r?\\n)--${escaped}`)).slice(1);
     for (const section of sections) {
       if (section.startsWith('--')) break;
       collectBodies(splitPart(section.replace(/^\r?\n/, '')), found, depth + 1);

@@ -14,6 +14,7 @@ import { authRoutes } from './routes/auth-routes';
 import { healthRoutes } from './routes/health-routes';
 import { runsRoutes } from './routes/runs-routes';
 import { systemsRoutes } from './routes/systems-routes';
+import { classroomRoutes } from './routes/classroom-routes';
 
 /** An HTTP method as supertest names it. */
 export type HttpMethod = 'get' | 'post' | 'put' | 'patch' | 'delete';
@@ -65,7 +66,7 @@ export interface RouteGroup {
 }
 
 /** Every group; the authz test requires that together they list every route of the app. */
-export const routeGroups: readonly RouteGroup[] = [healthRoutes, authRoutes, adminRoutes, systemsRoutes, runsRoutes];
+export const routeGroups: readonly RouteGroup[] = [healthRoutes, authRoutes, adminRoutes, systemsRoutes, runsRoutes, classroomRoutes];
 
 /** All route cases of all groups. */
 export const allRoutes: readonly RouteCase[] = routeGroups.flatMap((group) => group.routes);
