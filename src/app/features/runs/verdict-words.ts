@@ -48,40 +48,65 @@ export function bedSentence(bed: BedSummary): string {
   }
 }
 
-/** Check names as the engine reports them, in plain words; unknown ones are spelled out. */
-const CHECK_WORDS: Readonly<Record<string, string>> = {
-  'bed-cycles': 'Every bed floods and drains',
-  'siphon-primes': 'Every siphon starts',
-  'siphon-breaks': 'Every siphon stops again',
-  'tank-min-level': 'The fish tank stays above its safe level',
-  'min-level': 'Tanks stay above their safe levels',
-  'pump-dry': 'The pump never runs dry',
-  'no-overflow': 'Nothing overflows',
-  overflow: 'Nothing overflows',
-  'rim-overflow': 'No vessel spills over its rim',
-  'water-lost': 'No water is lost',
-  'mass-balance': 'The simulation conserves water',
-  'back-siphon': 'No water siphons back when the pump stops',
+/** A verdict as the page shows it: the check in words, and value and limit in the reader's units. */
+export interface VerdictReading {
+  readonly title: string;
+  readonly value: string;
+  readonly limit: string;
+}
+
+/** Bed regimes as the engine names them, in words. */
+const STATE_WORDS: Readonly<Record<string, string>> = {
+  cycling: 'cycles',
+  'spill-stall': 'stalls spilling (never primes)',
+  'siphon-lock': 'siphon locks on (never breaks)',
+  flooded: 'stays flooded',
+  idle: 'never fills',
+  'cycling or flooded': 'cycles or stays flooded',
 };
 
-/** A check's name in plain words ("tank-min-level:tank" → "The fish tank stays above its safe level (tank)"). */
-export function checkWords(check: string): string {
-  const [name = check, where] = check.split(':');
-  const words = CHECK_WORDS[name] ?? capitalise(name.replaceAll(/[-_]/g, ' '));
-  return where ? `${words} (${where})` : words;
+/**
+ * Reads a verdict for people. The engine writes each check as a phrase ending in its unit, e.g.
+ * "tank: stays above its fish-safe minimum level (m)"; the unit tells how to show the numbers:
+ * lengths and volumes in the reader's units, times as durations, others as plain figures.
+ */
+export function readVerdict(verdict: Verdict, system: UnitSystem): VerdictReading {
+  const match = /^(.*?)\s*\(([^()]*)\)$/.exec(verdict.check);
+  const phrase = match?.[1] ?? verdict.check;
+  const unitHint = match?.[2] ?? '';
+  // A limit written with its unit ("5–60 min") gives the unit of a bare numeric value.
+  const limitUnit =
+    typeof verdict.limit === 'string' ? /\s(min|h|s)$/.exec(verdict.limit)?.[1] : undefined;
+  const show = (figure: number | string | null) => {
+    const words = figureWords(figure, unitHint, system);
+    return typeof figure === 'number' && limitUnit && !knownUnit(unitHint)
+      ? `${words} ${limitUnit}`
+      : words;
+  };
+  const title = match && !knownUnit(unitHint) ? verdict.check : phrase;
+  return { title: capitalise(title), value: show(verdict.value), limit: show(verdict.limit) };
 }
 
-/** A verdict's value or limit for reading: numbers to four significant digits, text as is. */
-export function verdictFigure(value: number | string | null): string {
-  if (value === null) return '–';
-  if (typeof value === 'string') return value;
-  return String(Number(value.toPrecision(4)));
+/** A one-line reading of a verdict: "Tank: stays above its fish-safe minimum level: 0.48 m (limit 0.4 m)." */
+export function verdictSentence(verdict: Verdict, system: UnitSystem): string {
+  const reading = readVerdict(verdict, system);
+  const limit = verdict.limit === null ? '' : ` (limit ${reading.limit})`;
+  return `${reading.title}: ${reading.value}${limit}.`;
 }
 
-/** A one-line reading of a verdict: "The pump never runs dry: 0 (limit 0)". */
-export function verdictSentence(verdict: Verdict): string {
-  const limit = verdict.limit === null ? '' : `, limit ${verdictFigure(verdict.limit)}`;
-  return `${checkWords(verdict.check)}: ${verdictFigure(verdict.value)}${limit}.`;
+function knownUnit(hint: string): boolean {
+  return /(^|\s|,)(m|L|s dry|°C)$/.test(hint);
+}
+
+function figureWords(figure: number | string | null, unitHint: string, system: UnitSystem): string {
+  if (figure === null) return '–';
+  if (typeof figure === 'string') return STATE_WORDS[figure] ?? figure;
+  if (/(^|\s|,)m$/.test(unitHint)) return formatQuantity(figure, 'length', system);
+  if (/(^|\s)L$/.test(unitHint)) return formatQuantity(figure / 1000, 'volume', system);
+  if (unitHint === 's dry') return figure === 0 ? 'never' : `${durationWords(figure)} dry`;
+  if (unitHint.endsWith('°C')) return formatQuantity(figure, 'temperature', system);
+  if (Math.abs(figure) > 0 && Math.abs(figure) < 1e-3) return figure.toExponential(1);
+  return String(Number(figure.toPrecision(4)));
 }
 
 /** A level in the reader's units, or a dash. */
