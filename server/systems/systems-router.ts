@@ -78,8 +78,8 @@ export function systemsRouter(ctx: AppContext): Router {
     const request = parseOr400(ShareRequestSchema, req.body);
     res.status(201).json(await shareSystem(db, currentUser(req), param(req, 'systemId'), request));
   });
-  router.delete('/systems/:systemId/shares/:userId', async (req, res) => {
-    await unshareSystem(db, currentUser(req), param(req, 'systemId'), param(req, 'userId'));
+  router.delete('/systems/:systemId/shares/:shareUserId', async (req, res) => {
+    await unshareSystem(db, currentUser(req), param(req, 'systemId'), param(req, 'shareUserId'));
     res.status(204).end();
   });
   return router;
