@@ -2,9 +2,15 @@
 import { HttpClient, HttpErrorResponse } from '@angular/common/http';
 import { Injectable, computed, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import { readApiError } from '../http/read-api-error';
+import type { ApiError } from '../../../../shared/contracts/api-error';
 import type { User, UserRole } from '../../../../shared/contracts/auth';
-import { readMeResponse } from './read-me-response';
+
+/*
+ * The zod-based readers are imported lazily: zod is large, and keeping it off the static import
+ * graph keeps it out of the first download. Each import starts alongside the request it serves.
+ */
+const loadMeReader = () => import('./read-me-response').then((m) => m.readMeResponse);
+const loadErrorReader = () => import('../http/read-api-error').then((m) => m.readApiError);
 
 /** What `signIn` ends with: the user, or a message the sign-in form can show as it is. */
 export type SignInResult =
@@ -42,8 +48,9 @@ export class AuthState {
   /** Asks the server who is signed in; a 401 (or no server) means nobody. */
   async refresh(): Promise<User | null> {
     try {
+      const reader = loadMeReader();
       const body = await firstValueFrom(this.http.get<unknown>('/api/auth/me'));
-      this.current.set(readMeResponse(body));
+      this.current.set((await reader)(body));
     } catch (error: unknown) {
       if (!(error instanceof HttpErrorResponse)) throw error;
       this.current.set(null);
@@ -59,14 +66,15 @@ export class AuthState {
    */
   async signIn(email: string, password: string): Promise<SignInResult> {
     await this.ready();
+    const reader = loadMeReader();
     let body: unknown;
     try {
       body = await firstValueFrom(this.http.post<unknown>('/api/auth/login', { email, password }));
     } catch (error: unknown) {
       if (!(error instanceof HttpErrorResponse)) throw error;
-      return { status: 'rejected', message: signInFailureMessage(error) };
+      return { status: 'rejected', message: signInFailureMessage(error, await loadErrorReader()) };
     }
-    const user = readMeResponse(body);
+    const user = (await reader)(body);
     this.current.set(user);
     this.settled.set(true);
     return { status: 'signed-in', user };
@@ -91,7 +99,10 @@ export class AuthState {
 }
 
 /** The sentence shown under the sign-in form for a failed login. */
-function signInFailureMessage(error: HttpErrorResponse): string {
+function signInFailureMessage(
+  error: HttpErrorResponse,
+  readApiError: (body: unknown) => ApiError | null,
+): string {
   if (error.status === 0) {
     return 'The Tidewright server did not answer. Check your connection (or that the server is running) and try again.';
   }

@@ -44,7 +44,7 @@ const signedInUser: User = {
   units: 'metric',
 };
 
-/** Lets the awaited HTTP calls inside `submit()` continue. */
+/** Lets `submit()` reach its HTTP call once the session look-up has settled. */
 const settle = () => new Promise((resolve) => setTimeout(resolve));
 
 describe('SignIn', () => {
@@ -75,7 +75,7 @@ describe('SignIn', () => {
   });
 
   it("shows the server's message when the password is refused", async () => {
-    const { fixture, root, http } = await renderSignIn();
+    const { root, http } = await renderSignIn();
     type(root, 'input[type=email]', 'ada@example.org');
     type(root, 'input[type=password]', 'wrong-pass');
     submit(root);
@@ -86,23 +86,23 @@ describe('SignIn', () => {
       { error: { code: 'BAD_CREDENTIALS', message: 'E-mail or password is not right.' } },
       { status: 401, statusText: 'Unauthorized' },
     );
-    await settle();
-    await fixture.whenStable();
-    expect(root.querySelector('[role=alert]')?.textContent).toContain(
-      'E-mail or password is not right.',
+    await vi.waitFor(() =>
+      expect(root.querySelector('[role=alert]')?.textContent).toContain(
+        'E-mail or password is not right.',
+      ),
     );
   });
 
   it('says the server did not answer when the network fails', async () => {
-    const { fixture, root, http } = await renderSignIn();
+    const { root, http } = await renderSignIn();
     type(root, 'input[type=email]', 'ada@example.org');
     type(root, 'input[type=password]', 'any-pass');
     submit(root);
     await settle();
     http.expectOne('/api/auth/login').error(new ProgressEvent('error'), { status: 0 });
-    await settle();
-    await fixture.whenStable();
-    expect(root.querySelector('[role=alert]')?.textContent).toContain('server did not answer');
+    await vi.waitFor(() =>
+      expect(root.querySelector('[role=alert]')?.textContent).toContain('server did not answer'),
+    );
   });
 
   it('signs in and goes to the return URL', async () => {
@@ -113,9 +113,8 @@ describe('SignIn', () => {
     submit(root);
     await settle();
     http.expectOne('/api/auth/login').flush({ user: signedInUser });
-    await settle();
+    await vi.waitFor(() => expect(navigate).toHaveBeenCalledWith('/admin/users'));
     expect(TestBed.inject(AuthState).user()).toEqual(signedInUser);
-    expect(navigate).toHaveBeenCalledWith('/admin/users');
   });
 
   it('ignores a return URL that leaves the site', async () => {
@@ -126,7 +125,6 @@ describe('SignIn', () => {
     submit(root);
     await settle();
     http.expectOne('/api/auth/login').flush({ user: signedInUser });
-    await settle();
-    expect(navigate).toHaveBeenCalledWith('/systems');
+    await vi.waitFor(() => expect(navigate).toHaveBeenCalledWith('/systems'));
   });
 });
