@@ -7,6 +7,7 @@ import { authRouter } from './auth/auth-router';
 import { adminRouter } from './admin/admin-router';
 import { systemsRouter } from './systems/systems-router';
 import { runsRouter } from './runs/runs-router';
+import { classroomRouter } from './classroom/classroom-router';
 
 /** Mounts every resource's router. Features add their line here. */
 export function apiRouter(ctx: AppContext): Router {
@@ -16,6 +17,7 @@ export function apiRouter(ctx: AppContext): Router {
   router.use(adminRouter(ctx));
   router.use(systemsRouter(ctx));
   router.use(runsRouter(ctx));
+  router.use(classroomRouter(ctx));
   router.use(notFoundHandler);
   return router;
 }

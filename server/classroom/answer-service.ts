@@ -36,6 +36,9 @@ export async function runLesson(deps: ClassroomDeps, user: SessionUser, lessonId
   if (!answer) throw new HttpError(409, 'PREDICT_FIRST', 'Save your predictions first; the run then shows how they compare.');
   if (answer.ranAt) return toMyAnswer(answer);
   const simulation = await deps.simulations.get(row.id, row.scenario);
+  if (simulation.status === 'failed' || simulation.status === 'cancelled') {
+    throw new HttpError(503, 'LESSON_RUN_FAILED', `The simulation did not finish (${simulation.error ?? 'no reason given'}); your predictions are kept, so run it again in a moment.`);
+  }
   const results: StoredResults = { simulation, outcomes: grade(storedQuestions(row), storedPredictions(answer), simulation) };
   return toMyAnswer(await lessons.saveResults(deps.db, answer.id, results, deps.now()));
 }

@@ -53,8 +53,8 @@ export function classroomRouter(ctx: AppContext, deps: ClassroomDeps = classroom
   router.get('/classes/:classId/roster', requireAuth, async (req, res) => {
     res.json(await classService.getRoster(db, currentUser(req), param(req.params.classId), deps.now()));
   });
-  router.delete('/classes/:classId/students/:userId', requireAuth, async (req, res) => {
-    await classService.removeStudent(db, currentUser(req), param(req.params.classId), param(req.params.userId));
+  router.delete('/classes/:classId/students/:studentId', requireAuth, async (req, res) => {
+    await classService.removeStudent(db, currentUser(req), param(req.params.classId), param(req.params.studentId));
     res.status(204).end();
   });
   router.post('/classes/:classId/invitations', requireAuth, async (req, res) => {
@@ -99,12 +99,13 @@ function mountLessonRoutes(router: Router, deps: ClassroomDeps): void {
     const body = parseOr400(DuplicateLessonRequestSchema, req.body ?? {});
     res.status(201).json(await lessonService.duplicateLesson(deps, currentUser(req), param(req.params.lessonId), body));
   });
-  router.put('/lessons/:lessonId/answer', requireAuth, async (req, res) => {
+  // A student's actions name the lesson assigned to them (same ids, a different part in it).
+  router.put('/lessons/:assignedLessonId/answer', requireAuth, async (req, res) => {
     const body = parseOr400(AnswerRequestSchema, req.body);
-    res.json(await answerService.saveAnswer(deps, currentUser(req), param(req.params.lessonId), body));
+    res.json(await answerService.saveAnswer(deps, currentUser(req), param(req.params.assignedLessonId), body));
   });
-  router.post('/lessons/:lessonId/run', requireAuth, async (req, res) => {
-    res.json(await answerService.runLesson(deps, currentUser(req), param(req.params.lessonId)));
+  router.post('/lessons/:assignedLessonId/run', requireAuth, async (req, res) => {
+    res.json(await answerService.runLesson(deps, currentUser(req), param(req.params.assignedLessonId)));
   });
   router.get('/lessons/:lessonId/report', requireAuth, async (req, res) => {
     res.json(await answerService.getReport(deps, currentUser(req), param(req.params.lessonId)));

@@ -56,6 +56,10 @@ export interface RouteCase {
   okStatus?: number;
   /** True for routes whose job is to change other users (admin user management). */
   changesOtherUsers?: boolean;
+  /** Top-level body fields that accept values of any JSON type (skipped by the wrong-type test). */
+  anyTypeFields?: readonly string[];
+  /** How many random payloads the property test sends (default 25; lower it for costly routes). */
+  fuzzRuns?: number;
 }
 
 /** A feature's routes and the fixture step their resources need. */
