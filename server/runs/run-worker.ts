@@ -6,7 +6,7 @@
  */
 import { performance } from 'node:perf_hooks';
 import { parentPort } from 'node:worker_threads';
-import { simulate, type SimulationOutcome } from '../../engine/index';
+import { ScenarioModelError, simulate, type SimulationOutcome } from '../../engine/index';
 import type { Scenario } from '../../shared/scenario/index';
 import type { RunJobMessage, RunJobOutcome, RunResultParts, RunWorkerMessage } from './run-worker-messages';
 import { encodeSeries } from './series-codec';
@@ -88,7 +88,10 @@ port.on('message', (job: RunJobMessage) => {
     const message = error instanceof Error ? error.message : String(error);
     const outcome: RunJobOutcome = {
       status: 'failed',
-      error: `The simulation stopped on an internal error (${message}); please report it with the scenario.`,
+      error:
+        error instanceof ScenarioModelError
+          ? `The system cannot be simulated as drawn: ${message}`
+          : `The simulation stopped on an internal error (${message}); please report it with the scenario.`,
       result: null,
       series: null,
       sampleCount: 0,

@@ -35,43 +35,53 @@ export type StartRunRequest = z.infer<typeof StartRunRequestSchema>;
 
 const nullableNumber = z.number().nullable();
 
-/** Per-bed cycle statistics; means are null when no full cycle happened. */
-export const BedSummarySchema = z.looseObject({
+/**
+ * Per-bed cycle statistics; means are null when no full cycle happened. Flood = fill start to
+ * priming, drain = priming to break; levels are means over cycles, m above the bed floor.
+ */
+export const BedSummarySchema = z.object({
   id: z.string(),
   cycles: z.number(),
   periodMean_s: nullableNumber,
+  periodMin_s: nullableNumber.optional(),
+  periodMax_s: nullableNumber.optional(),
   floodMean_s: nullableNumber,
   drainMean_s: nullableNumber,
   highLevel_m: nullableNumber,
   lowLevel_m: nullableNumber,
+  /** Share of the run spent at flood level (spilling or siphoning). */
+  fractionFlooded: nullableNumber.optional(),
   state: z.enum(['cycling', 'spill-stall', 'siphon-lock', 'flooded', 'idle']),
 });
 /** Per-bed cycle statistics. */
 export type BedSummary = z.infer<typeof BedSummarySchema>;
 
 /** Per-vessel extremes and water lost (leaks, overflows to "out"). */
-export const VesselSummarySchema = z.looseObject({
+export const VesselSummarySchema = z.object({
   id: z.string(),
   minLevel_m: nullableNumber,
   minLevelAt_s: nullableNumber,
   maxLevel_m: nullableNumber,
+  maxLevelAt_s: nullableNumber.optional(),
   lost_m3: nullableNumber,
 });
 /** Per-vessel extremes. */
 export type VesselSummary = z.infer<typeof VesselSummarySchema>;
 
-/** Per-pump mean flow, time run dry and energy. */
-export const PumpSummarySchema = z.looseObject({
+/** Per-pump mean flow, time run dry and energy (from the rated power when given, else water power). */
+export const PumpSummarySchema = z.object({
   id: z.string(),
   meanFlow_m3s: nullableNumber,
   dry_s: nullableNumber,
   energy_J: nullableNumber,
+  energyBasis: z.enum(['rated-power', 'water-power']).optional(),
+  energyPerDay_J: nullableNumber.optional(),
 });
 /** Per-pump figures. */
 export type PumpSummary = z.infer<typeof PumpSummarySchema>;
 
 /** The engine's summary of a run. */
-export const RunSummarySchema = z.looseObject({
+export const RunSummarySchema = z.object({
   beds: z.array(BedSummarySchema),
   vessels: z.array(VesselSummarySchema),
   pumps: z.array(PumpSummarySchema),
@@ -79,18 +89,19 @@ export const RunSummarySchema = z.looseObject({
 /** The engine's summary of a run. */
 export type RunSummary = z.infer<typeof RunSummarySchema>;
 
-/** Something that happened at `t_s` in `where` (a vessel, bed or pump id). */
-export const RunEventSchema = z.looseObject({
+/** Something that happened at `t_s` in `where` (a vessel, bed or pump id); `values` in SI. */
+export const RunEventSchema = z.object({
   t_s: z.number(),
   kind: z.string(),
   where: z.string(),
   detail: z.string(),
+  values: z.record(z.string(), z.number().nullable()).optional(),
 });
 /** One event. */
 export type RunEvent = z.infer<typeof RunEventSchema>;
 
 /** One check with its number, its limit and the published source or practice behind the limit. */
-export const VerdictSchema = z.looseObject({
+export const VerdictSchema = z.object({
   check: z.string(),
   status: VerdictStatusSchema,
   value: z.union([z.number(), z.string()]).nullable(),
@@ -100,13 +111,14 @@ export const VerdictSchema = z.looseObject({
 /** One verdict. */
 export type Verdict = z.infer<typeof VerdictSchema>;
 
-/** Integrator statistics, the relative mass-balance error and the server's wall time. */
-export const RunStatsSchema = z.looseObject({
+/** Integrator statistics, the simulated time reached and the server's wall time. */
+export const RunStatsSchema = z.object({
   steps: z.number(),
   rejected: z.number(),
   rhsEvaluations: z.number(),
   events: z.number(),
   wall_ms: z.number(),
+  simulated_s: z.number().optional(),
 });
 /** Integrator statistics. */
 export type RunStats = z.infer<typeof RunStatsSchema>;
