@@ -61,3 +61,12 @@ test('the dark theme is remembered across a reload', async ({ page }) => {
     await page.screenshot({ path: join(artifacts, 'home-dark.png'), fullPage: true });
   }
 });
+
+test('the footer link opens the safety cautions page', async ({ page }) => {
+  await page.goto('/');
+  await page.locator('footer').getByRole('link', { name: 'Safety cautions' }).click();
+  await expect(page).toHaveURL(/\/safety$/);
+  await expect(page.getByText('Ground-fault', { exact: false })).toBeVisible();
+  await expect(page.locator('tw-safety-cautions li')).toHaveCount(5);
+  await expect(page).toHaveTitle('Safety cautions · Tidewright');
+});
