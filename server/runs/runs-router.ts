@@ -2,6 +2,7 @@
 import { Router, type Request } from 'express';
 import {
   RunCompareQuerySchema,
+  RunGetQuerySchema,
   RunListQuerySchema,
   RunSeriesQuerySchema,
   StartRunRequestSchema,
@@ -40,7 +41,8 @@ export function runsRouter(ctx: AppContext): Router {
     res.json(await compareTwoRuns(deps, currentUser(req), a, b));
   });
   router.get('/runs/:runId', async (req, res) => {
-    res.json(await getRun(deps, currentUser(req), param(req, 'runId')));
+    const { snapshot } = parseOr400(RunGetQuerySchema, req.query);
+    res.json(await getRun(deps, currentUser(req), param(req, 'runId'), snapshot === '1'));
   });
   router.post('/runs/:runId/cancel', async (req, res) => {
     res.json(await cancelRun(deps, currentUser(req), param(req, 'runId')));

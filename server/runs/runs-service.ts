@@ -9,6 +9,7 @@ import {
   type RunList,
   type RunListQuery,
   type RunStarted,
+  type RunWithSnapshot,
   type StartRunRequest,
 } from '../../shared/contracts/runs';
 import { parseQuantity, parseScenario, type Scenario } from '../../shared/scenario/index';
@@ -134,9 +135,11 @@ export async function requireRun(db: Database, user: User, runId: string, need: 
   return row;
 }
 
-/** `GET /api/runs/:id`. */
-export async function getRun(deps: RunsDeps, user: User, runId: string): Promise<Run> {
-  return toRun(await requireRun(deps.db, user, runId, 'read'), deps.pool);
+/** `GET /api/runs/:id`, with the normalised scenario snapshot when asked. */
+export async function getRun(deps: RunsDeps, user: User, runId: string, withSnapshot = false): Promise<Run | RunWithSnapshot> {
+  const row = await requireRun(deps.db, user, runId, 'read');
+  const run = toRun(row, deps.pool);
+  return withSnapshot ? { ...run, scenario: row.scenario as Record<string, unknown> } : run;
 }
 
 /** `GET /api/systems/:id/runs`. */

@@ -24,7 +24,7 @@ export async function storeRunOutcome(
           ...result.stats,
           massBalanceError: result.massBalanceError,
           sampleCount: outcome.sampleCount,
-          ...(options ? { outputInterval_s: options.outputIntervalS, maxSamples: options.maxSamples } : {}),
+          ...(options ? { maxSamples: options.maxSamples } : {}),
         }
       : null;
     const stored = await finishRun(db, row.id, {

@@ -119,6 +119,8 @@ export const RunStatsSchema = z.object({
   events: z.number(),
   wall_ms: z.number(),
   simulated_s: z.number().optional(),
+  /** The sample cap the server gave the engine (needed to reproduce the run's series). */
+  maxSamples: z.number().int().optional(),
 });
 /** Integrator statistics. */
 export type RunStats = z.infer<typeof RunStatsSchema>;
@@ -157,6 +159,9 @@ export const RunStartedSchema = z.object({
 });
 /** The 202 answer of an asynchronous start. */
 export type RunStarted = z.infer<typeof RunStartedSchema>;
+
+/** `GET /api/runs/:id` query: `snapshot=1` adds the normalised scenario the run used. */
+export const RunGetQuerySchema = z.object({ snapshot: z.enum(['0', '1']).optional() });
 
 /** `GET /api/runs/:id?snapshot=1` adds the normalised scenario the run used (all SI, defaults filled). */
 export const RunWithSnapshotSchema = RunSchema.extend({ scenario: z.record(z.string(), z.unknown()) });
