@@ -82,6 +82,7 @@ function storageAreaM2(vessel: Vessel, zones: OpenZone[], z: number, planM2: num
     footprint = Math.max(footprint, zone.footprintM2);
     solid += zone.solidM2;
   }
+  if (footprint >= planM2) return 0;
   const porosity = z < vessel.media.depth ? vessel.media.porosity : 1;
   return porosity * (planM2 - footprint) + (footprint - solid);
 }
