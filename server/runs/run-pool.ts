@@ -7,6 +7,7 @@
 import { availableParallelism } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import type { RunJobOptions, RunJobOutcome, RunWorkerMessage } from './run-worker-messages';
+import { timeLimitMessage } from './time-limit-message';
 
 /** Pool settings. */
 export interface RunPoolOptions {
@@ -208,12 +209,7 @@ export class RunPool {
       timeLimitMs: this.options.timeLimitMs,
       stopFlag: pending.stopFlag.buffer,
     });
-    const limitS = Math.round(this.options.timeLimitMs / 1000);
-    this.armKill(
-      pending,
-      this.options.timeLimitMs + this.options.graceMs,
-      `Stopped at the ${limitS} s time limit for one run; shorten the duration or simplify the system and run again.`,
-    );
+    this.armKill(pending, this.options.timeLimitMs + this.options.graceMs, timeLimitMessage(this.options.timeLimitMs));
   }
 
   private armKill(pending: Pending, afterMs: number, error: string): void {

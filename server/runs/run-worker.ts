@@ -10,6 +10,7 @@ import { ScenarioModelError, simulate, type SimulationOutcome } from '../../engi
 import type { Scenario } from '../../shared/scenario/index';
 import type { RunJobMessage, RunJobOutcome, RunResultParts, RunWorkerMessage } from './run-worker-messages';
 import { encodeSeries } from './series-codec';
+import { timeLimitMessage } from './time-limit-message';
 
 const port = parentPort;
 if (!port) throw new Error('run-worker.ts must be started as a worker thread.');
@@ -31,13 +32,7 @@ function resultParts(outcome: SimulationOutcome, wallMs: number): RunResultParts
 
 function describeStop(cause: 'cancel' | 'time' | null, job: RunJobMessage, reason: string | undefined) {
   if (cause === 'cancel') return { status: 'cancelled' as const, error: 'Cancelled before the end; the result is partial.' };
-  if (cause === 'time') {
-    const limitS = Math.round(job.timeLimitMs / 1000);
-    return {
-      status: 'failed' as const,
-      error: `Stopped at the ${limitS} s time limit for one run; shorten the duration or simplify the system and run again.`,
-    };
-  }
+  if (cause === 'time') return { status: 'failed' as const, error: timeLimitMessage(job.timeLimitMs) };
   return { status: 'stopped' as const, error: reason ?? 'The engine stopped before the end of the run.' };
 }
 
