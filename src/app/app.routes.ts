@@ -25,6 +25,11 @@ export const routes: Routes = [
     loadChildren: () => import('./features/systems/systems.routes').then((m) => m.systemsRoutes),
   },
   {
+    path: 'runs',
+    canMatch: [roleGuard()],
+    loadChildren: () => import('./features/runs/runs.routes').then((m) => m.runsRoutes),
+  },
+  {
     // Any signed-in user: students reach their classes here; only staff see it in the menu.
     path: 'classes',
     canMatch: [roleGuard()],

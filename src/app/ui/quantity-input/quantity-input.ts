@@ -20,8 +20,8 @@ import {
 } from '../../../../shared/scenario';
 import { readTypedQuantity } from './read-typed-quantity';
 
-/** Significant digits shown when a stored SI value is put into the field. */
-const EDIT_DIGITS = 6;
+/** Significant digits shown for a stored value; the value itself keeps every digit until retyped. */
+const EDIT_DIGITS = 4;
 
 /**
  * A Material text field for one physical quantity. The form control holds the value in SI

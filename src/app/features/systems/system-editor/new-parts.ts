@@ -1,0 +1,114 @@
+/**
+ * Starting values for parts added in the editor, in SI (our own typical small-system sizes:
+ * 1-inch Schedule 40 PVC bores, a 3-inch bell). Each is a complete, valid piece of a scenario
+ * document once its `to`/`in` names an existing vessel.
+ */
+
+/** A fitting-free pipe of `lengthM` and bore `innerDiameterM`. */
+export function newPipe(lengthM: number, innerDiameterM: number) {
+  return {
+    length: lengthM,
+    innerDiameter: innerDiameterM,
+    material: 'pvc',
+    fittings: { elbow90: 0, elbow45: 0, teeRun: 0, teeBranch: 0, ballValve: 0 },
+  };
+}
+
+/** A 1.0 × 0.6 m tank or sump, 0.6 m deep, filled to 0.5 m. */
+export function newTank(id: string, kind: 'tank' | 'sump') {
+  return {
+    id,
+    kind,
+    shape: { type: 'box', length: 1.0, width: 0.6 },
+    floorElevation: 0,
+    height: 0.6,
+    initialLevel: 0.5,
+    minLevel: null,
+  };
+}
+
+/** A bell-siphon drain into `to`, with a 0.25 m standpipe of 1-inch bore. */
+export function newBellSiphonDrain(to: string, outletElevationM: number) {
+  return {
+    type: 'bell-siphon',
+    to,
+    standpipe: { innerDiameter: 0.0266, outerDiameter: 0.0334, height: 0.25 },
+    bell: {
+      innerDiameter: 0.0779,
+      capGap: 0.025,
+      intakeHeight: 0.025,
+      slotCount: null,
+      slotWidth: null,
+    },
+    pipe: newPipe(0.7, 0.0266),
+    outletElevation: outletElevationM,
+  };
+}
+
+/** A plain overflow standpipe drain into `to`. */
+export function newStandpipeDrain(to: string, outletElevationM: number) {
+  return {
+    type: 'standpipe',
+    to,
+    standpipe: { innerDiameter: 0.0266, outerDiameter: 0.0334, height: 0.25 },
+    pipe: newPipe(0.7, 0.0266),
+    outletElevation: outletElevationM,
+  };
+}
+
+/** A 1.0 × 0.6 × 0.3 m gravel bed with its floor at 0.8 m, draining to `to`. */
+export function newBed(id: string, to: string) {
+  return {
+    id,
+    kind: 'bed',
+    shape: { type: 'box', length: 1.0, width: 0.6 },
+    floorElevation: 0.8,
+    height: 0.3,
+    initialLevel: 0,
+    minLevel: null,
+    media: { type: 'gravel', porosity: null, depth: 0.28 },
+    drain: newBellSiphonDrain(to, 0.65),
+  };
+}
+
+/** An outlet into `to` at `elevationM`, valve open. */
+export function newOutlet(to: string, elevationM: number) {
+  return { to, elevation: elevationM, valveOpening: 1, pipe: newPipe(1.5, 0.0158) };
+}
+
+/** A small pump in `source` (2.2 m shut-off head, 2000 L/h free flow) feeding `to`. */
+export function newPump(id: string, source: string, to: string) {
+  return {
+    id,
+    in: source,
+    intakeHeight: 0.05,
+    curve: [
+      { flow: 0, head: 2.2 },
+      { flow: 1200 / 3.6e6, head: 1.4 },
+      { flow: 2000 / 3.6e6, head: 0 },
+    ],
+    power: null,
+    checkValve: false,
+    initialState: 'on',
+    main: newPipe(0.5, 0.0209),
+    outlets: [newOutlet(to, 1.2)],
+  };
+}
+
+/** A 4 mm leak in `from`, 5 cm above the datum, from the third hour. */
+export function newLeak(from: string) {
+  return { from, elevation: 0.05, diameter: 0.004, start: 3 * 3600 };
+}
+
+/** A power cut (all pumps off) at two hours. */
+export function newPowerCut() {
+  return { at: 2 * 3600, power: 'off' };
+}
+
+/** The first id of the form `<stem>-<n>` not in `taken`. */
+export function freshId(stem: string, taken: readonly string[]): string {
+  for (let n = 1; ; n++) {
+    const id = `${stem}-${n}`;
+    if (!taken.includes(id)) return id;
+  }
+}
