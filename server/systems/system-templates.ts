@@ -11,7 +11,7 @@ import { TIMER_BED_TEMPLATE } from './templates/timer-bed-template';
 /** Example files used as templates, relative to `scenarios/`. */
 export const TEMPLATE_FILES = {
   greenhouse: 'greenhouse-three-beds.json',
-  tabletop: 'classroom-tabletop.json',
+  tabletop: 'tabletop-classroom.json',
 } as const;
 
 /** Reads one of the example scenario files (a fresh copy each time). */

@@ -83,7 +83,7 @@ describe('systems API', () => {
     expect(badTemplate.error.fields?.map((f) => f.path)).toEqual(['template']);
   });
 
-  it.each(['timer-bed', 'blank'] as const)('creates a valid system from the %s template', async (template) => {
+  it.each(['greenhouse', 'tabletop', 'timer-bed', 'blank'] as const)('creates a valid system from the %s template', async (template) => {
     const res = await owner.post('/api/systems').send({ template, name: `From ${template}` });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     const system = SystemSchema.parse(res.body);
