@@ -34,11 +34,10 @@ export interface HybridSystem {
 export interface TrajectoryObserver {
   /** An accepted step; the segment's arrays are reused after the call returns. */
   onSegment(segment: StepSegment): void;
-  /**
-   * A transition at `timeS`: the state just before and just after (equal unless the model moved
-   * water instantly). Called after the model switched modes.
-   */
-  onTransition(timeS: number, stateBefore: Float64Array, stateAfter: Float64Array): void;
+  /** Called just before the model switches modes at `timeS`, with the state at that instant. */
+  beforeTransition(timeS: number, state: Float64Array): void;
+  /** Called just after the switch, with the state afterwards (changed if water moved instantly). */
+  afterTransition(timeS: number, state: Float64Array): void;
 }
 
 /** Integrator counters, as reported in a run's statistics. */
@@ -53,8 +52,8 @@ export interface IntegrationStats {
   events: number;
 }
 
-/** How an integration ended; `failed` carries the reason and the time reached. */
+/** How an integration ended, with the time and state reached; `failed` carries the reason. */
 export type IntegrationOutcome =
-  | { status: 'completed'; endS: number; stats: IntegrationStats }
-  | { status: 'stopped'; endS: number; stats: IntegrationStats }
-  | { status: 'failed'; endS: number; stats: IntegrationStats; reason: string };
+  | { status: 'completed'; endS: number; state: Float64Array; stats: IntegrationStats }
+  | { status: 'stopped'; endS: number; state: Float64Array; stats: IntegrationStats }
+  | { status: 'failed'; endS: number; state: Float64Array; stats: IntegrationStats; reason: string };

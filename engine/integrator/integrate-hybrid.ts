@@ -2,6 +2,7 @@ import { makeCashKarpStepper, type CashKarpStepper, type StepperSettings } from 
 import { hermiteStateAt } from './hermite-interpolant';
 import type { HybridSystem, IntegrationOutcome, IntegrationStats, TrajectoryObserver } from './hybrid-system';
 import { locateCrossing } from './locate-crossing';
+import { startingStepS } from './starting-step';
 import { makeStepSegment, type StepSegment } from './step-segment';
 
 /** Settings of one hybrid integration. */
@@ -48,7 +49,6 @@ class HybridRun {
   private readonly stepper: CashKarpStepper;
   private readonly segment: StepSegment;
   private readonly scratchState: Float64Array;
-  private readonly before: Float64Array;
   private readonly gValues: Float64Array;
   private readonly gScratch: Float64Array;
   private readonly armed: Uint8Array;
@@ -61,6 +61,9 @@ class HybridRun {
   private nextProgress = 0.01;
   private tinySteps = 0;
   private extraEvaluations = 0;
+  private naturalStepS = 0;
+  private learning: number[] = [];
+  private readonly learnedStepS: Float64Array;
 
   constructor(
     private readonly system: HybridSystem,
@@ -72,18 +75,18 @@ class HybridRun {
     this.stepper = makeCashKarpStepper((out, y, t) => system.derivative(out, y, t), n, settings);
     this.segment = makeStepSegment(n);
     this.scratchState = new Float64Array(n);
-    this.before = new Float64Array(n);
     this.y = Float64Array.from(initialState);
     this.f = new Float64Array(n);
     this.gValues = new Float64Array(system.eventCount);
     this.gScratch = new Float64Array(system.eventCount);
     this.armed = new Uint8Array(system.eventCount);
+    this.learnedStepS = new Float64Array(system.eventCount);
     this.timeS = settings.startS;
   }
 
   execute(): IntegrationOutcome {
     try {
-      this.applyTransition([], true, this.settings.initialStepS);
+      this.applyTransition([], true, undefined);
       this.stats.events = 0;
       while (this.timeS < this.settings.endS) {
         if (this.settings.shouldStop?.()) return this.finish('stopped');
@@ -102,8 +105,9 @@ class HybridRun {
     this.stats.rhsEvaluations = this.stepper.counters.rhsEvaluations + this.extraEvaluations;
     this.stats.rejected = this.stepper.counters.rejected;
     const stats = { ...this.stats };
-    if (status === 'failed') return { status, endS: this.timeS, stats, reason: reason ?? 'unknown failure' };
-    return { status, endS: this.timeS, stats };
+    const state = Float64Array.from(this.y);
+    if (status === 'failed') return { status, endS: this.timeS, state, stats, reason: reason ?? 'unknown failure' };
+    return { status, endS: this.timeS, state, stats };
   }
 
   private evaluate(out: Float64Array, y: Float64Array, timeS: number): void {
@@ -117,14 +121,16 @@ class HybridRun {
     const limitS = Math.min(this.settings.endS, this.system.nextTimedTransitionS(this.timeS));
     const seg = this.takeStep(limitS);
     let fired = this.firedEvents(seg.y1, seg.t1S);
+    this.naturalStepS = this.stepper.nextStepS;
     if (fired.length === 0) {
+      this.learnRestartStep(seg, limitS);
       this.accept(seg);
     } else {
       this.reintegrateTo(this.locateEarliest(seg, fired));
       fired = this.firedEvents(this.y, this.timeS);
     }
     const timedDue = this.timeS === limitS && limitS < this.settings.endS;
-    if (fired.length > 0 || timedDue) this.applyTransition(fired, timedDue, this.stepper.nextStepS);
+    if (fired.length > 0 || timedDue) this.applyTransition(fired, timedDue, this.restartStepS(fired));
   }
 
   /** Takes one adaptive step from the current point; returns it as a segment. */
@@ -208,18 +214,51 @@ class HybridRun {
     }
   }
 
-  /** Switches modes at the current time, reports it, and restarts the stepper there. */
-  private applyTransition(fired: readonly number[], timed: boolean, stepS: number): void {
+  /**
+   * Switches modes at the current time, reports it, and restarts the stepper there with the step
+   * size the integration had before the event (the error test cuts it at once if the new mode is
+   * faster), or at the very start with a computed starting step.
+   */
+  private applyTransition(fired: readonly number[], timed: boolean, previousStepS: number | undefined): void {
     this.guardChatter();
-    this.before.set(this.y);
+    this.observer.beforeTransition(this.timeS, this.y);
     this.system.transition(this.timeS, this.y, fired, timed);
     assertFinite(this.y, this.timeS, 'state after a transition');
-    this.observer.onTransition(this.timeS, this.before, this.y);
+    this.observer.afterTransition(this.timeS, this.y);
     this.stats.events += 1;
     this.evaluate(this.f, this.y, this.timeS);
     this.system.eventValues(this.gValues, this.y, this.timeS);
     for (let i = 0; i < this.gValues.length; i += 1) this.armed[i] = (this.gValues[i] as number) > 0 ? 1 : 0;
-    this.stepper.reset(this.timeS, this.y, this.f, stepS);
+    this.stepper.reset(this.timeS, this.y, this.f, previousStepS ?? this.startingStep());
+  }
+
+  /**
+   * The step to restart with after the transition fired by `fired`: the step before the event,
+   * but no longer than the first step that was accepted after the same event last time (the new
+   * mode's own time scale, e.g. the small steps a weir needs just after it starts to spill).
+   */
+  private restartStepS(fired: readonly number[]): number {
+    let stepS = this.naturalStepS;
+    for (const index of fired) {
+      const learned = this.learnedStepS[index] as number;
+      if (learned > 0) stepS = Math.min(stepS, learned);
+    }
+    this.learning = fired.slice();
+    return stepS;
+  }
+
+  /** Remembers the first full step accepted after a transition, per event that fired it. */
+  private learnRestartStep(seg: StepSegment, limitS: number): void {
+    if (this.learning.length === 0) return;
+    if (seg.t1S < limitS) for (const index of this.learning) this.learnedStepS[index] = seg.t1S - seg.t0S;
+    this.learning = [];
+  }
+
+  private startingStep(): number {
+    this.extraEvaluations += 1;
+    const { relativeTolerance, errorFloor, maxStepS } = this.settings;
+    const rhs = (out: Float64Array, y: Float64Array, t: number): void => this.system.derivative(out, y, t);
+    return startingStepS(rhs, this.timeS, this.y, this.f, relativeTolerance, errorFloor, maxStepS, this.scratchState, this.segment.f1);
   }
 
   /** Fails when the modes keep switching without time advancing. */

@@ -1,0 +1,33 @@
+import type { Overflow } from '../../shared/scenario';
+import { torricelliOutflowM3PerS } from '../hydraulics/torricelli-outflow';
+import { weirFlowM3PerS } from '../hydraulics/weir-flow';
+import type { ModelComponent, ModelContext } from '../system/model-context';
+import type { VesselComponent } from './vessel';
+
+/**
+ * Flow through a vessel's overflow opening of diameter D whose invert is at elevation z_o, m³/s:
+ *   Q = min( C_w·D·H^1.5 , C_d·(π·D²/4)·√(2·g·H) ),  H = z_surface − z_o,
+ * a weir over the opening's lower edge (crest length taken as D) while the head is small, an
+ * orifice once it is drowned; the smaller controls (the weir-to-orifice transition of drop inlets:
+ * USDA-SCS Engineering Field Manual ch. 6; EPA SWMM 5 orifice/weir notes). Free discharge into the
+ * receiving vessel or out of the system is assumed.
+ */
+export function overflowFlowM3PerS(overflow: Overflow, headM: number): number {
+  if (!(headM > 0)) return 0;
+  const weir = weirFlowM3PerS(overflow.weirCoefficient, overflow.diameter, headM);
+  const areaM2 = (Math.PI / 4) * overflow.diameter ** 2;
+  return Math.min(weir, torricelliOutflowM3PerS(overflow.dischargeCoefficient, areaM2, headM));
+}
+
+/** The overflow of `vessel` on `channel` (to another vessel or to its loss sink). Its start and end are observed by the vessel. */
+export function makeVesselOverflow(vessel: VesselComponent, overflow: Overflow, channel: number): ModelComponent {
+  return {
+    eventCount: 0,
+    eventOffset: 0,
+    computeFlows: (ctx: ModelContext) => {
+      ctx.flowM3PerS[channel] = overflowFlowM3PerS(overflow, (ctx.surfaceM[vessel.index] as number) - overflow.elevation);
+    },
+    eventValues: () => {},
+    switchModes: () => false,
+  };
+}

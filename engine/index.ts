@@ -1,0 +1,18 @@
+/**
+ * The Tidewright hydraulic engine: pure TypeScript, no I/O, no clock. Import only this module
+ * from outside engine/.
+ */
+export { simulate, ScenarioModelError } from './simulate';
+export type {
+  BedState,
+  BedSummary,
+  PumpSummary,
+  RunEvent,
+  RunStats,
+  SeriesChannel,
+  SimulateOptions,
+  SimulationOutcome,
+  SimulationResult,
+  Verdict,
+  VesselSummary,
+} from './results/run-result';

@@ -1,0 +1,106 @@
+import type { Scenario } from '../shared/scenario';
+import type { TrajectoryObserver } from './integrator/hybrid-system';
+import { integrateHybrid, type IntegrateSettings } from './integrator/integrate-hybrid';
+import type { StepSegment } from './integrator/step-segment';
+import { BedCycleRecorder } from './results/bed-cycle-recorder';
+import { LevelExtremesTracker } from './results/level-extremes';
+import type { SimulateOptions, SimulationOutcome } from './results/run-result';
+import { makeSeriesProbe } from './results/series-probe';
+import { SeriesRecorder } from './results/series-recorder';
+import { summariseRun } from './results/summarise-run';
+import { StallMonitor } from './system/stall-monitor';
+import { SystemModel } from './system/system-model';
+
+/** A scenario that passed the schema but cannot be modelled (e.g. a shape with no storage area). */
+export class ScenarioModelError extends Error {
+  readonly code = 'invalid-scenario';
+}
+
+/** Longest integration step, s: bounds how long a level can go unobserved between event checks. */
+const MAX_STEP_S = 120;
+
+/**
+ * Simulates a normalised scenario: builds the system model, integrates it with located events,
+ * and returns the summary, events, verdicts, mass-balance error, statistics and series. A
+ * numerical failure (a NaN, a stall of the integrator) is returned as `failed` with the partial
+ * result up to the time reached; invalid options or an unmodellable scenario throw.
+ */
+export function simulate(scenario: Scenario, options: SimulateOptions = {}): SimulationOutcome {
+  const durationS = options.durationS ?? scenario.run.duration;
+  if (!(durationS > 0) || !Number.isFinite(durationS)) throw new ScenarioModelError(`The duration must be a positive number of seconds (got ${durationS}).`);
+  const model = buildModel(scenario, options.hydraulics === 'exact');
+  const initialState = model.initialState();
+  const recorder = makeRecorder(model, durationS, options);
+  const extremes = new LevelExtremesTracker(model.parts.vessels);
+  const bedIndex = new Map(model.parts.vessels.filter((v) => v.vessel.kind === 'bed').map((v) => [v.vessel.id, v.index]));
+  const cycles = new BedCycleRecorder(model.events, bedIndex, extremes.extremes);
+  const stalls = new StallMonitor(model);
+  const observer = composeObservers([extremes, cycles, recorder], stalls);
+  const outcome = integrateHybrid(model, initialState, integrationSettings(model, scenario, durationS, options), observer);
+  const summary = summariseRun({
+    model, initialState, finalState: outcome.state, startS: 0, endS: outcome.endS,
+    extremes: extremes.extremes, cycleMarks: cycles.marks,
+  });
+  const events = [...model.events].sort((a, b) => a.t_s - b.t_s);
+  const result = {
+    ...summary,
+    events,
+    stats: { ...outcome.stats, wall_ms: 0, simulated_s: outcome.endS },
+    series: { t_s: recorder.timesS, channels: recorder.channels() },
+  };
+  if (outcome.status === 'failed') return { status: 'failed', reason: outcome.reason, result };
+  return { status: outcome.status, result };
+}
+
+function buildModel(scenario: Scenario, exactHydraulics: boolean): SystemModel {
+  try {
+    return new SystemModel(scenario, exactHydraulics);
+  } catch (error) {
+    throw new ScenarioModelError(error instanceof Error ? error.message : String(error));
+  }
+}
+
+function makeRecorder(model: SystemModel, durationS: number, options: SimulateOptions): SeriesRecorder {
+  const requested = options.outputIntervalS ?? model.parts.scenario.run.outputInterval;
+  if (!(requested > 0)) throw new ScenarioModelError(`The output interval must be positive (got ${requested}).`);
+  const { maxSamples } = options;
+  const intervalS = maxSamples === undefined ? requested : Math.max(requested, durationS / Math.max(1, maxSamples - 1));
+  return new SeriesRecorder(makeSeriesProbe(model), model.stateSize, 0, intervalS, maxSamples === undefined);
+}
+
+function integrationSettings(model: SystemModel, scenario: Scenario, durationS: number, options: SimulateOptions): IntegrateSettings {
+  const { layout, vessels } = model.parts;
+  const capacityM3 = vessels.reduce((sum, v) => sum + v.geometry.rimVolumeM3, 0);
+  const errorFloor = new Float64Array(model.stateSize).fill(1e-3 * capacityM3);
+  for (const vessel of vessels) errorFloor[vessel.index] = 1e-3 * vessel.geometry.rimVolumeM3;
+  for (const index of layout.energyIndex.values()) errorFloor[index] = 1;
+  return {
+    startS: 0,
+    endS: durationS,
+    relativeTolerance: scenario.run.tolerance,
+    errorFloor,
+    maxStepS: Math.min(MAX_STEP_S, durationS / 4),
+    initialStepS: Math.min(0.01, durationS / 100),
+    eventToleranceFraction: 1e-6,
+    maxSteps: 20_000_000,
+    maxTransitionsAtOneInstant: 100,
+    ...(options.shouldStop && { shouldStop: options.shouldStop }),
+    ...(options.onProgress && { onProgress: options.onProgress }),
+  };
+}
+
+/** Runs the stall monitor and then each observer, in order, on every piece of the trajectory. */
+function composeObservers(observers: readonly TrajectoryObserver[], stalls: StallMonitor): TrajectoryObserver {
+  return {
+    onSegment: (segment: StepSegment) => {
+      stalls.onSegment(segment);
+      for (const o of observers) o.onSegment(segment);
+    },
+    beforeTransition: (timeS, state) => {
+      for (const o of observers) o.beforeTransition(timeS, state);
+    },
+    afterTransition: (timeS, state) => {
+      for (const o of observers) o.afterTransition(timeS, state);
+    },
+  };
+}
