@@ -33,7 +33,13 @@ export const routes: Routes = [
     // Any signed-in user: students reach their classes here; only staff see it in the menu.
     path: 'classes',
     canMatch: [roleGuard()],
-    loadChildren: () => import('./features/classes/classes.routes').then((m) => m.classesRoutes),
+    loadChildren: () =>
+      import('./features/classroom/classroom.routes').then((m) => m.classroomRoutes),
+  },
+  {
+    // The landing page of an e-mailed class invitation: open to signed-out visitors.
+    path: 'join',
+    loadChildren: () => import('./features/join/join.routes').then((m) => m.joinRoutes),
   },
   {
     path: 'admin',
