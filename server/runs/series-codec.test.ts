@@ -1,4 +1,4 @@
-import { gunzipSync } from 'node:zlib';
+import { gunzipSync, gzipSync } from 'node:zlib';
 import { describe, expect, it } from 'vitest';
 import { decodeSeries, encodeSeries, seriesToJson } from './series-codec';
 
@@ -20,13 +20,29 @@ describe('encodeSeries / decodeSeries', () => {
     expect(decoded.channels[1]).toMatchObject({ kind: 'phase', where: 'bed-a', unit: '' });
   });
 
-  it('stores one compact gzip blob whose columns are 8-byte aligned after the header', () => {
-    const blob = encodeSeries(series);
-    const raw = gunzipSync(blob);
-    expect(raw.toString('latin1', 0, 4)).toBe('TWS1');
+  it('stores one gzip blob: header, then the Float64 columns split into byte planes', () => {
+    const raw = gunzipSync(encodeSeries(series));
+    expect(raw.toString('latin1', 0, 4)).toBe('TWS2');
     const headerLength = raw.readUInt32LE(4);
     const dataStart = Math.ceil((8 + headerLength) / 8) * 8;
     expect(raw.length).toBe(dataStart + 8 * 4 * 3);
+    // Byte plane 7 holds the most significant byte of each value: t_s = 5 is 0x4014000000000000.
+    const count = 4 * 3;
+    expect(raw[dataStart + 7 * count + 1]).toBe(0x40);
+    expect(raw[dataStart + 6 * count + 1]).toBe(0x14);
+  });
+
+  it('still reads the earlier plain-column layout', () => {
+    const header = Buffer.from(JSON.stringify({ sampleCount: 2, channels: [{ id: 'level:a', kind: 'level', where: 'a', unit: 'm' }] }));
+    const dataStart = Math.ceil((8 + header.length) / 8) * 8;
+    const raw = Buffer.alloc(dataStart + 32);
+    raw.write('TWS1', 0, 'latin1');
+    raw.writeUInt32LE(header.length, 4);
+    header.copy(raw, 8);
+    [0, 5, 0.25, 0.5].forEach((v, i) => raw.writeDoubleLE(v, dataStart + 8 * i));
+    const decoded = decodeSeries(gzipSync(raw));
+    expect(Array.from(decoded.t_s)).toEqual([0, 5]);
+    expect(Array.from(decoded.channels[0]?.values ?? [])).toEqual([0.25, 0.5]);
   });
 
   it('compresses a long smooth series well below its raw size', () => {
