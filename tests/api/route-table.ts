@@ -15,6 +15,7 @@ import { healthRoutes } from './routes/health-routes';
 import { runsRoutes } from './routes/runs-routes';
 import { systemsRoutes } from './routes/systems-routes';
 import { classroomRoutes } from './routes/classroom-routes';
+import { measurementsRoutes } from './routes/measurements-routes';
 
 /** An HTTP method as supertest names it. */
 export type HttpMethod = 'get' | 'post' | 'put' | 'patch' | 'delete';
@@ -58,7 +59,7 @@ export interface RouteCase {
   changesOtherUsers?: boolean;
   /** Top-level body fields that accept values of any JSON type (skipped by the wrong-type test). */
   anyTypeFields?: readonly string[];
-  /** How many random payloads the property test sends (default 25; lower it for costly routes). */
+  /** How many random payloads the property test sends (default 20; lower it for costly routes). */
   fuzzRuns?: number;
 }
 
@@ -70,7 +71,7 @@ export interface RouteGroup {
 }
 
 /** Every group; the authz test requires that together they list every route of the app. */
-export const routeGroups: readonly RouteGroup[] = [healthRoutes, authRoutes, adminRoutes, systemsRoutes, runsRoutes, classroomRoutes];
+export const routeGroups: readonly RouteGroup[] = [healthRoutes, authRoutes, adminRoutes, systemsRoutes, runsRoutes, classroomRoutes, measurementsRoutes];
 
 /** All route cases of all groups. */
 export const allRoutes: readonly RouteCase[] = routeGroups.flatMap((group) => group.routes);
