@@ -8,6 +8,7 @@ import { adminRouter } from './admin/admin-router';
 import { systemsRouter } from './systems/systems-router';
 import { runsRouter } from './runs/runs-router';
 import { classroomRouter } from './classroom/classroom-router';
+import { measurementsRouter } from './measurements/measurements-router';
 
 /** Mounts every resource's router. Features add their line here. */
 export function apiRouter(ctx: AppContext): Router {
@@ -18,6 +19,7 @@ export function apiRouter(ctx: AppContext): Router {
   router.use(systemsRouter(ctx));
   router.use(runsRouter(ctx));
   router.use(classroomRouter(ctx));
+  router.use(measurementsRouter(ctx));
   router.use(notFoundHandler);
   return router;
 }

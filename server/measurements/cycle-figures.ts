@@ -16,7 +16,9 @@ export interface Spread {
   count: number;
 }
 
-function spread(values: readonly number[]): Spread | null {
+/** Spread of the finite values (a mark an event did not record is NaN and left out); null for none. */
+export function spreadOf(all: readonly number[]): Spread | null {
+  const values = all.filter(Number.isFinite);
   if (values.length === 0) return null;
   const mean = values.reduce((a, b) => a + b, 0) / values.length;
   const variance = values.length > 1 ? values.reduce((a, v) => a + (v - mean) ** 2, 0) / (values.length - 1) : 0;
@@ -46,17 +48,21 @@ export function cycleSpreads(cycles: readonly DrainCycle[]): CycleSpreads {
   }
   return {
     cycles: cycles.length,
-    period: spread(periods),
-    flood: spread(floods),
-    drain: spread(cycles.map((c) => c.breakS - c.primeS)),
-    high: spread(cycles.map((c) => c.highM)),
-    low: spread(cycles.map((c) => c.lowM)),
+    period: spreadOf(periods),
+    flood: spreadOf(floods),
+    drain: spreadOf(cycles.map((c) => c.breakS - c.primeS)),
+    high: spreadOf(cycles.map((c) => c.highM)),
+    low: spreadOf(cycles.map((c) => c.lowM)),
   };
 }
 
 /** The means of `cycleSpreads` as the API shows them. */
 export function cycleFigures(cycles: readonly DrainCycle[]): CycleFigures {
-  const s = cycleSpreads(cycles);
+  return figuresFromSpreads(cycleSpreads(cycles));
+}
+
+/** The means of spreads (from cycles or a stopwatch log) as the API shows them. */
+export function figuresFromSpreads(s: CycleSpreads): CycleFigures {
   return {
     cycles: s.cycles,
     periodS: s.period?.mean ?? null,

@@ -155,13 +155,13 @@ export const ParsedRowSchema = z.object({
 /** A row as read. */
 export type ParsedRow = z.infer<typeof ParsedRowSchema>;
 
-/** Per vessel: sample count, span and level range. */
+/** Per vessel: sample count (cycles for a stopwatch log), span and level range (null when unknown). */
 export const MeasuredBedOverviewSchema = z.object({
   bed: z.string(),
   samples: z.number().int(),
   durationS: z.number(),
-  minLevel_m: z.number(),
-  maxLevel_m: z.number(),
+  minLevel_m: z.number().nullable(),
+  maxLevel_m: z.number().nullable(),
 });
 /** Per-vessel overview. */
 export type MeasuredBedOverview = z.infer<typeof MeasuredBedOverviewSchema>;
