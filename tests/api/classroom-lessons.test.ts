@@ -51,13 +51,16 @@ describe('lessons', () => {
     teacher = signedIn.client;
     const students = await Promise.all(['Sam', 'Kim'].map((name) => createTestUser(t.ctx, { name })));
     classId = await makeClass(t.ctx, signedIn.user.id, students.map((s) => s.user.id));
-    [sam, kim] = await Promise.all(
+    const clients = await Promise.all(
       students.map(async ({ user, password }) => {
         const client = await TestClient.create(app);
         await client.signIn(user.email, password);
         return client;
       }),
     );
+    const [first, second] = clients;
+    if (!first || !second) throw new Error('Two students were made.');
+    [sam, kim] = [first, second];
   });
   afterAll(async () => {
     await t.close();
