@@ -20,6 +20,24 @@ export const routes: Routes = [
     title: 'Sign in · Tidewright',
   },
   {
+    path: 'register',
+    canActivate: [signedOutGuard],
+    loadComponent: () => import('./features/auth/register').then((m) => m.Register),
+    title: 'Create an account · Tidewright',
+  },
+  {
+    path: 'forgot-password',
+    canActivate: [signedOutGuard],
+    loadComponent: () => import('./features/auth/forgot-password').then((m) => m.ForgotPassword),
+    title: 'Reset your password · Tidewright',
+  },
+  {
+    // Open to anyone holding the e-mailed link, signed in or not.
+    path: 'reset-password',
+    loadComponent: () => import('./features/auth/reset-password').then((m) => m.ResetPassword),
+    title: 'Choose a new password · Tidewright',
+  },
+  {
     path: 'systems',
     canMatch: [roleGuard()],
     loadChildren: () => import('./features/systems/systems.routes').then((m) => m.systemsRoutes),
@@ -30,7 +48,7 @@ export const routes: Routes = [
     loadChildren: () => import('./features/runs/runs.routes').then((m) => m.runsRoutes),
   },
   {
-    // Any signed-in user: students reach their classes here; only staff see it in the menu.
+    // Any signed-in user: instructors teach classes here and students reach the ones they are in.
     path: 'classes',
     canMatch: [roleGuard()],
     loadChildren: () =>

@@ -7,7 +7,7 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import { Router } from '@angular/router';
+import { Router, RouterLink } from '@angular/router';
 import { AuthState } from '../../core/auth/auth-state';
 import { SafetyCautions } from '../../ui/safety-cautions/safety-cautions';
 import { fieldErrorMessage } from './field-error-message';
@@ -26,6 +26,7 @@ import { fieldErrorMessage } from './field-error-message';
     MatInputModule,
     MatProgressBarModule,
     ReactiveFormsModule,
+    RouterLink,
     SafetyCautions,
   ],
   templateUrl: './sign-in.html',
