@@ -53,9 +53,9 @@ describe('Shell', () => {
     expect(labels.some((label) => label.endsWith('Admin'))).toBe(false);
   });
 
-  it('shows a member only Systems', async () => {
+  it('shows a member Systems and Classes (where they are a student), not Admin', async () => {
     const labels = navLabels(await renderShell(userWithRole('member')));
-    expect(labels.map((label) => label.split(' ').pop())).toEqual(['Systems']);
+    expect(labels.map((label) => label.split(' ').pop())).toEqual(['Systems', 'Classes']);
   });
 
   it('shows the user name when signed in and a Sign in button when not', async () => {

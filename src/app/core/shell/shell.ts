@@ -20,7 +20,8 @@ interface NavLink {
 /** Every main navigation entry; the shell shows those the signed-in user's role allows. */
 const NAV_LINKS: readonly NavLink[] = [
   { path: '/systems', label: 'Systems', icon: 'water', roles: ['admin', 'instructor', 'member'] },
-  { path: '/classes', label: 'Classes', icon: 'school', roles: ['admin', 'instructor'] },
+  // Everyone: instructors teach classes there, and any member may be a student in one.
+  { path: '/classes', label: 'Classes', icon: 'school', roles: ['admin', 'instructor', 'member'] },
   { path: '/admin', label: 'Admin', icon: 'admin_panel_settings', roles: ['admin'] },
 ];
 

@@ -1,5 +1,13 @@
 import { HttpClient } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  input,
+  signal,
+} from '@angular/core';
 import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
@@ -25,7 +33,15 @@ type JoinStep = 'loading' | 'closed' | 'join' | 'other-account' | 'sign-in' | 'r
  */
 @Component({
   selector: 'tw-join-page',
-  imports: [MatButtonModule, MatCardModule, MatFormFieldModule, MatIconModule, MatInputModule, MatProgressBarModule, ReactiveFormsModule],
+  imports: [
+    MatButtonModule,
+    MatCardModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatProgressBarModule,
+    ReactiveFormsModule,
+  ],
   templateUrl: './join-page.html',
   styleUrl: './join-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -52,10 +68,27 @@ export class JoinPage {
     if (preview.status === 'accepted') return 'closed';
     return preview.hasAccount ? 'sign-in' : 'register';
   });
-  protected readonly password = new FormControl('', { nonNullable: true, validators: [Validators.required] });
+  protected readonly heading = computed(() => {
+    const preview = this.preview();
+    return preview ? `Join “${preview.className}”` : 'Class invitation';
+  });
+  protected readonly subheading = computed(() => {
+    const preview = this.preview();
+    return preview ? `${preview.instructorName} invited ${preview.email}` : '';
+  });
+  protected readonly password = new FormControl('', {
+    nonNullable: true,
+    validators: [Validators.required],
+  });
   protected readonly registration = new FormGroup({
-    name: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.maxLength(120)] }),
-    password: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.minLength(10)] }),
+    name: new FormControl('', {
+      nonNullable: true,
+      validators: [Validators.required, Validators.maxLength(120)],
+    }),
+    password: new FormControl('', {
+      nonNullable: true,
+      validators: [Validators.required, Validators.minLength(10)],
+    }),
   });
 
   constructor() {
@@ -82,7 +115,13 @@ export class JoinPage {
     if (!preview || this.registration.invalid) return this.registration.markAllAsTouched();
     await this.attempt(async () => {
       const { name, password } = this.registration.getRawValue();
-      await firstValueFrom(this.http.post<unknown>('/api/auth/register', { name: name.trim(), email: preview.email, password }));
+      await firstValueFrom(
+        this.http.post<unknown>('/api/auth/register', {
+          name: name.trim(),
+          email: preview.email,
+          password,
+        }),
+      );
       await this.auth.refresh();
       await this.accept();
     });
