@@ -10,10 +10,22 @@ import { RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
   template: `
     <h1 class="title">Administration</h1>
     <nav mat-tab-nav-bar [tabPanel]="panel" aria-label="Administration">
-      <a mat-tab-link routerLink="users" routerLinkActive #users="routerLinkActive" [active]="users.isActive">
+      <a
+        mat-tab-link
+        routerLink="users"
+        routerLinkActive
+        #users="routerLinkActive"
+        [active]="users.isActive"
+      >
         <mat-icon class="tab-icon">group</mat-icon> Users
       </a>
-      <a mat-tab-link routerLink="outbox" routerLinkActive #outbox="routerLinkActive" [active]="outbox.isActive">
+      <a
+        mat-tab-link
+        routerLink="outbox"
+        routerLinkActive
+        #outbox="routerLinkActive"
+        [active]="outbox.isActive"
+      >
         <mat-icon class="tab-icon">outbox</mat-icon> Outbox
       </a>
     </nav>

@@ -2,9 +2,14 @@ import { linkSegments } from './link-segments';
 
 describe('linkSegments', () => {
   it('turns http and https URLs into links and keeps the text around them', () => {
-    expect(linkSegments('Open https://tw.example/reset-password?token=a_B-1 within 60 minutes.')).toEqual([
+    expect(
+      linkSegments('Open https://tw.example/reset-password?token=a_B-1 within 60 minutes.'),
+    ).toEqual([
       { text: 'Open ' },
-      { text: 'https://tw.example/reset-password?token=a_B-1', href: 'https://tw.example/reset-password?token=a_B-1' },
+      {
+        text: 'https://tw.example/reset-password?token=a_B-1',
+        href: 'https://tw.example/reset-password?token=a_B-1',
+      },
       { text: ' within 60 minutes.' },
     ]);
   });
@@ -18,6 +23,8 @@ describe('linkSegments', () => {
   });
 
   it('never makes a link of other schemes', () => {
-    expect(linkSegments('javascript:alert(1) and ftp://host/file')).toEqual([{ text: 'javascript:alert(1) and ftp://host/file' }]);
+    expect(linkSegments('javascript:alert(1) and ftp://host/file')).toEqual([
+      { text: 'javascript:alert(1) and ftp://host/file' },
+    ]);
   });
 });

@@ -44,7 +44,9 @@ export class UserTable {
   protected readonly myId = computed(() => this.auth.user()?.id ?? null);
   protected readonly shown = computed(() => {
     const q = this.query().trim().toLowerCase();
-    return q ? this.users().filter((u) => u.name.toLowerCase().includes(q) || u.email.includes(q)) : this.users();
+    return q
+      ? this.users().filter((u) => u.name.toLowerCase().includes(q) || u.email.includes(q))
+      : this.users();
   });
 
   constructor() {
@@ -72,7 +74,11 @@ export class UserTable {
   }
 
   protected setActive(user: AdminUser, active: boolean): void {
-    void this.save(user, { disabled: !active }, active ? `${user.name} can sign in again.` : `${user.name} is disabled and signed out.`);
+    void this.save(
+      user,
+      { disabled: !active },
+      active ? `${user.name} can sign in again.` : `${user.name} is disabled and signed out.`,
+    );
   }
 
   private async save(user: AdminUser, patch: AdminUserPatch, note: string): Promise<void> {

@@ -13,11 +13,13 @@ export function applyServerErrors(
   codeToField: Readonly<Record<string, string>> = {},
 ): string | null {
   if (!(error instanceof HttpErrorResponse)) throw error;
-  if (error.status === 0) return 'The Tidewright server did not answer. Check your connection and try again.';
+  if (error.status === 0)
+    return 'The Tidewright server did not answer. Check your connection and try again.';
   const body = readApiError(error.error);
   if (!body) return `The server answered ${error.status}; try again in a moment.`;
   const target = codeToField[body.error.code];
-  const fields = body.error.fields ?? (target ? [{ path: target, message: body.error.message }] : []);
+  const fields =
+    body.error.fields ?? (target ? [{ path: target, message: body.error.message }] : []);
   let unplaced = fields.length === 0;
   for (const field of fields) {
     const control = form.get(field.path);

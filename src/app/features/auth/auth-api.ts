@@ -24,7 +24,9 @@ export class AuthApi {
 
   /** Asks for a reset link; the answer is the same whether or not the address has an account. */
   async requestPasswordReset(email: string): Promise<string> {
-    const body = await firstValueFrom(this.http.post<unknown>('/api/auth/password-reset', { email }));
+    const body = await firstValueFrom(
+      this.http.post<unknown>('/api/auth/password-reset', { email }),
+    );
     return PasswordResetAcceptedSchema.parse(body).message;
   }
 

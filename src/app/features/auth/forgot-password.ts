@@ -33,7 +33,10 @@ export class ForgotPassword {
   private readonly api = inject(AuthApi);
 
   protected readonly form = new FormGroup({
-    email: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.email] }),
+    email: new FormControl('', {
+      nonNullable: true,
+      validators: [Validators.required, Validators.email],
+    }),
   });
   protected readonly busy = signal(false);
   protected readonly failure = signal<string | null>(null);
@@ -43,7 +46,10 @@ export class ForgotPassword {
   private readonly formChanges = toSignal(this.form.events, { initialValue: null });
   protected readonly emailError = computed(() => {
     this.formChanges();
-    return controlErrorMessage(this.form.controls.email.errors, 'Enter the e-mail address of your account.');
+    return controlErrorMessage(
+      this.form.controls.email.errors,
+      'Enter the e-mail address of your account.',
+    );
   });
 
   protected async sendLink(): Promise<void> {

@@ -39,9 +39,18 @@ export class Register {
 
   protected readonly minLength = PASSWORD_MIN_LENGTH;
   protected readonly form = new FormGroup({
-    name: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.maxLength(120)] }),
-    email: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.email] }),
-    password: new FormControl('', { nonNullable: true, validators: [Validators.required, zodValidator(PasswordSchema)] }),
+    name: new FormControl('', {
+      nonNullable: true,
+      validators: [Validators.required, Validators.maxLength(120)],
+    }),
+    email: new FormControl('', {
+      nonNullable: true,
+      validators: [Validators.required, Validators.email],
+    }),
+    password: new FormControl('', {
+      nonNullable: true,
+      validators: [Validators.required, zodValidator(PasswordSchema)],
+    }),
   });
   protected readonly busy = signal(false);
   protected readonly failure = signal<string | null>(null);
@@ -50,7 +59,10 @@ export class Register {
   private readonly formChanges = toSignal(this.form.events, { initialValue: null });
   protected readonly nameError = computed(() => {
     this.formChanges();
-    return controlErrorMessage(this.form.controls.name.errors, 'Enter your name as others should see it.');
+    return controlErrorMessage(
+      this.form.controls.name.errors,
+      'Enter your name as others should see it.',
+    );
   });
   protected readonly emailError = computed(() => {
     this.formChanges();

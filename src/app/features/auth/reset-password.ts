@@ -41,7 +41,10 @@ export class ResetPassword {
 
   protected readonly minLength = PASSWORD_MIN_LENGTH;
   protected readonly form = new FormGroup({
-    password: new FormControl('', { nonNullable: true, validators: [Validators.required, zodValidator(PasswordSchema)] }),
+    password: new FormControl('', {
+      nonNullable: true,
+      validators: [Validators.required, zodValidator(PasswordSchema)],
+    }),
   });
   protected readonly busy = signal(false);
   protected readonly failure = signal<string | null>(null);
@@ -69,8 +72,8 @@ export class ResetPassword {
     this.busy.set(true);
     try {
       await this.api.confirmPasswordReset(token, this.form.controls.password.value);
-      // The server signed this account out everywhere, this tab included.
-      this.auth.forget();
+      // The server signed the account out everywhere: if this tab was that account, it is signed out too.
+      await this.auth.refresh();
       this.done.set(true);
     } catch (error: unknown) {
       this.failure.set(applyServerErrors(this.form, error));

@@ -27,7 +27,8 @@ export const classroomRoutes: Routes = [
   },
   {
     path: 'lessons/:lessonId/present',
-    loadComponent: () => import('./presentation/lesson-presentation').then((m) => m.LessonPresentation),
+    loadComponent: () =>
+      import('./presentation/lesson-presentation').then((m) => m.LessonPresentation),
     title: 'Presenting · Tidewright',
   },
   {

@@ -47,3 +47,13 @@ export function compareFigure(
       return `${sign}${Number(value.toPrecision(4))}`;
   }
 }
+
+/** Relative change below which two figures count as the same (solver round-off, not design). */
+const SAME_WITHIN = 1e-6;
+
+/** True when B differs from A by more than round-off. */
+export function materiallyChanged(row: CompareRow): boolean {
+  if (row.a === null || row.b === null) return row.a !== row.b;
+  const scale = Math.max(Math.abs(row.a), Math.abs(row.b));
+  return Math.abs(row.b - row.a) > SAME_WITHIN * scale;
+}

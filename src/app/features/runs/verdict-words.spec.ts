@@ -36,7 +36,7 @@ describe('verdict words', () => {
       verdict('tank: stays above its fish-safe minimum level (m)', 0.4572, 0.4),
       'us',
     );
-    expect(reading).toEqual({
+    expect(reading).toMatchObject({
       title: 'Tank: stays above its fish-safe minimum level',
       value: '18.0 in',
       limit: '15.7 in',

@@ -53,6 +53,9 @@ export interface VerdictReading {
   readonly title: string;
   readonly value: string;
   readonly limit: string;
+  /** True when value (or limit) is a number, shown in the figures' typeface. */
+  readonly valueIsFigure: boolean;
+  readonly limitIsFigure: boolean;
 }
 
 /** Bed regimes as the engine names them, in words. */
@@ -84,7 +87,13 @@ export function readVerdict(verdict: Verdict, system: UnitSystem): VerdictReadin
       : words;
   };
   const title = match && !knownUnit(unitHint) ? verdict.check : phrase;
-  return { title: capitalise(title), value: show(verdict.value), limit: show(verdict.limit) };
+  return {
+    title: capitalise(title),
+    value: show(verdict.value),
+    limit: show(verdict.limit),
+    valueIsFigure: typeof verdict.value === 'number',
+    limitIsFigure: typeof verdict.limit === 'number' || /\d/.test(String(verdict.limit)),
+  };
 }
 
 /** A one-line reading of a verdict: "Tank: stays above its fish-safe minimum level: 0.48 m (limit 0.4 m)." */

@@ -17,9 +17,9 @@ export const CHART_COLOURS: readonly string[] = [
   '#c2410c',
   '#4d7c0f',
   '#7c3aed',
-  '#b45309',
-  '#0f766e',
   '#be185d',
+  '#a16207',
+  '#0f766e',
   '#475569',
 ];
 

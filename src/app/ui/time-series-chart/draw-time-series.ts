@@ -3,20 +3,36 @@ import { type ChartSeriesSet, chartColour } from './chart-series';
 import { type DisplayScale, toDisplayValue } from './display-scale';
 import { timeAxisUnit } from './time-axis';
 
-/** The chart's drawing box in SVG user units; the SVG scales to its container. */
-export const CHART_FRAME = {
-  width: 800,
-  height: 300,
-  top: 14,
-  right: 18,
-  bottom: 40,
-  left: 64,
-} as const;
+/** The chart's drawing box in SVG user units (one unit = one CSS pixel at the measured width). */
+export interface ChartFrame {
+  readonly width: number;
+  readonly height: number;
+  readonly top: number;
+  readonly right: number;
+  readonly bottom: number;
+  readonly left: number;
+}
+
+/** The frame for a chart `width` pixels wide (at least 320), 300 high. */
+export function chartFrame(width: number): ChartFrame {
+  return {
+    width: Math.max(320, Math.round(width)),
+    height: 300,
+    top: 14,
+    right: 18,
+    bottom: 40,
+    left: 64,
+  };
+}
+
+/** The frame used until the chart has measured its container. */
+export const CHART_FRAME: ChartFrame = chartFrame(800);
 
 /** Everything one drawing of the chart needs. */
 export interface ChartDrawing {
   readonly data: ChartSeriesSet;
   readonly overlay: ChartSeriesSet | null;
+  readonly frame: ChartFrame;
   readonly scale: DisplayScale;
   readonly yTitle: string;
   /** A document-unique id for the plot's clip path. */
@@ -31,6 +47,7 @@ type Point = readonly [number, number | null];
 export function baseTimeScale(
   data: ChartSeriesSet,
   overlay: ChartSeriesSet | null,
+  frame: ChartFrame,
 ): d3.ScaleLinear<number, number> {
   const times = [...data.t_s, ...(overlay?.t_s ?? [])];
   const [first, last] = d3.extent(times);
@@ -39,7 +56,7 @@ export function baseTimeScale(
   return d3
     .scaleLinear()
     .domain([start, end])
-    .range([CHART_FRAME.left, CHART_FRAME.width - CHART_FRAME.right]);
+    .range([frame.left, frame.width - frame.right]);
 }
 
 /** The value axis: the extent of every displayed value, padded by 5 % and made nice. */
@@ -58,7 +75,7 @@ export function valueScale(
   return d3
     .scaleLinear()
     .domain([low - pad, high + pad])
-    .range([CHART_FRAME.height - CHART_FRAME.bottom, CHART_FRAME.top])
+    .range([drawing.frame.height - drawing.frame.bottom, drawing.frame.top])
     .nice();
 }
 
@@ -111,7 +128,7 @@ function drawAxes(
   timeUnitS: number,
   timeLabel: string,
 ): void {
-  const { width, height, top, right, bottom, left } = CHART_FRAME;
+  const { width, height, top, right, bottom, left } = drawing.frame;
   root
     .selectAll('clipPath')
     .data([0])
@@ -124,10 +141,9 @@ function drawAxes(
     .attr('y', top)
     .attr('width', width - left - right)
     .attr('height', height - top - bottom);
-  const xAxis = d3
-    .axisBottom(drawing.x)
-    .ticks(8)
-    .tickFormat((t) => d3.format('~g')(Number(t) / timeUnitS));
+  // Ticks are chosen in the shown unit (minutes, hours) so they fall on round values.
+  const inUnit = drawing.x.copy().domain(drawing.x.domain().map((t) => t / timeUnitS));
+  const xAxis = d3.axisBottom(inUnit).ticks(Math.max(3, Math.floor(width / 100)));
   root
     .selectAll<SVGGElement, number>('g.x-axis')
     .data([0])
@@ -158,6 +174,7 @@ function drawAxes(
     .attr('text-anchor', 'middle')
     .attr('fill', 'currentColor')
     .attr('font-size', 11)
+    .attr('font-family', 'Roboto, sans-serif')
     .text((t) => t);
   root
     .selectAll('text.y-title')
@@ -168,5 +185,6 @@ function drawAxes(
     .attr('text-anchor', 'middle')
     .attr('fill', 'currentColor')
     .attr('font-size', 11)
+    .attr('font-family', 'Roboto, sans-serif')
     .text((t) => t);
 }

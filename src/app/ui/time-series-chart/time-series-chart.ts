@@ -1,7 +1,10 @@
 import {
   ChangeDetectionStrategy,
+  inject,
   Component,
+  DestroyRef,
   type ElementRef,
+  afterNextRender,
   computed,
   effect,
   input,
@@ -16,7 +19,7 @@ import type { Dimension, UnitSystem } from '../../../../shared/scenario';
 import { type ChartSeriesSet, chartColour, nearestSampleIndex } from './chart-series';
 import { chartPngBlob, chartSvgMarkup } from './chart-export';
 import { displayScale, formatDisplayValue, toDisplayValue } from './display-scale';
-import { CHART_FRAME, baseTimeScale, drawTimeSeries } from './draw-time-series';
+import { CHART_FRAME, baseTimeScale, chartFrame, drawTimeSeries } from './draw-time-series';
 import { formatElapsed } from './time-axis';
 
 let nextChartId = 1;
@@ -66,14 +69,16 @@ export class TimeSeriesChart {
   readonly cursorChange = output<number>();
 
   protected readonly clipId = `tw-chart-clip-${nextChartId++}`;
-  protected readonly viewBox = `0 0 ${CHART_FRAME.width} ${CHART_FRAME.height}`;
+  private readonly measuredWidth = signal(CHART_FRAME.width);
+  private readonly frame = computed(() => chartFrame(this.measuredWidth()));
+  protected readonly viewBox = computed(() => `0 0 ${this.frame().width} ${this.frame().height}`);
   private readonly svgRef = viewChild.required<ElementRef<SVGSVGElement>>('plot');
   private readonly transform = signal<d3.ZoomTransform>(d3.zoomIdentity);
   private readonly hoverS = signal<number | null>(null);
   private zoomBehaviour: d3.ZoomBehavior<SVGSVGElement, unknown> | null = null;
 
   private readonly scale = computed(() => displayScale(this.dimension(), this.system()));
-  private readonly baseX = computed(() => baseTimeScale(this.data(), this.overlay()));
+  private readonly baseX = computed(() => baseTimeScale(this.data(), this.overlay(), this.frame()));
   private readonly x = computed(() => this.transform().rescaleX(this.baseX()));
   protected readonly zoomed = computed(() => this.transform().k !== 1);
 
@@ -124,8 +129,8 @@ export class TimeSeriesChart {
 
   protected readonly cursorX = computed(() => this.lineX(this.cursorS()));
   protected readonly hoverX = computed(() => this.lineX(this.hoverS()));
-  protected readonly plotTop = CHART_FRAME.top;
-  protected readonly plotBottom = CHART_FRAME.height - CHART_FRAME.bottom;
+  protected readonly plotTop = computed(() => this.frame().top);
+  protected readonly plotBottom = computed(() => this.frame().height - this.frame().bottom);
 
   constructor() {
     effect(() => {
@@ -133,6 +138,7 @@ export class TimeSeriesChart {
       drawTimeSeries(this.svgRef().nativeElement, {
         data: this.data(),
         overlay: this.overlay(),
+        frame: this.frame(),
         scale: this.scale(),
         yTitle: label ? `${this.heading() || 'value'} (${label})` : this.heading(),
         clipId: this.clipId,
@@ -140,6 +146,7 @@ export class TimeSeriesChart {
       });
     });
     effect(() => this.attachZoom(this.svgRef().nativeElement));
+    this.followWidth();
   }
 
   /** The chart as an SVG document, for download. */
@@ -174,16 +181,22 @@ export class TimeSeriesChart {
   private lineX(timeS: number | null): number | null {
     if (timeS === null) return null;
     const px = this.x()(timeS);
-    return px >= CHART_FRAME.left && px <= CHART_FRAME.width - CHART_FRAME.right ? px : null;
+    const frame = this.frame();
+    return px >= frame.left && px <= frame.width - frame.right ? px : null;
   }
 
   private attachZoom(svg: SVGSVGElement): void {
-    if (this.zoomBehaviour) return;
-    const { width, height, left, right, top, bottom } = CHART_FRAME;
+    const { width, height, left, right, top, bottom } = this.frame();
     const extent: [[number, number], [number, number]] = [
       [left, top],
       [width - right, height - bottom],
     ];
+    if (this.zoomBehaviour) {
+      // A new width: the old zoom was in the old pixels, so start again unzoomed.
+      this.zoomBehaviour.extent(extent).translateExtent(extent);
+      d3.select(svg).call(this.zoomBehaviour.transform, d3.zoomIdentity);
+      return;
+    }
     this.zoomBehaviour = d3
       .zoom<SVGSVGElement, unknown>()
       .scaleExtent([1, 500])
@@ -195,5 +208,19 @@ export class TimeSeriesChart {
     d3.select(svg)
       .call(this.zoomBehaviour)
       .on('dblclick.zoom', () => this.resetZoom());
+  }
+
+  /** Draws at the container's real width, so text keeps its size on any screen. */
+  private followWidth(): void {
+    const destroyRef = inject(DestroyRef);
+    afterNextRender(() => {
+      if (typeof ResizeObserver === 'undefined') return;
+      const observer = new ResizeObserver((entries) => {
+        const width = entries[0]?.contentRect.width ?? 0;
+        if (width > 0) this.measuredWidth.set(width);
+      });
+      observer.observe(this.svgRef().nativeElement.parentElement ?? this.svgRef().nativeElement);
+      destroyRef.onDestroy(() => observer.disconnect());
+    });
   }
 }

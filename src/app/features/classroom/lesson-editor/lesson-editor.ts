@@ -15,7 +15,13 @@ import { SystemsApi } from '../../systems/systems-api';
 import { UnitPreference } from '../../systems/unit-preference';
 import { ClassroomApi } from '../classroom-api';
 import { problemMessage } from '../problem-message';
-import { QUESTION_KINDS, type QuestionDraft, type QuestionKind, defaultTolerance, toQuestions } from './question-draft';
+import {
+  QUESTION_KINDS,
+  type QuestionDraft,
+  type QuestionKind,
+  defaultTolerance,
+  toQuestions,
+} from './question-draft';
 
 /** The controls of one question. */
 type QuestionGroup = FormGroup<{ [K in keyof QuestionDraft]: FormControl<QuestionDraft[K]> }>;
@@ -26,7 +32,15 @@ type QuestionGroup = FormGroup<{ [K in keyof QuestionDraft]: FormControl<Questio
  */
 @Component({
   selector: 'tw-lesson-editor',
-  imports: [MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, ReactiveFormsModule, RouterLink],
+  imports: [
+    MatButtonModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatSelectModule,
+    ReactiveFormsModule,
+    RouterLink,
+  ],
   templateUrl: './lesson-editor.html',
   styleUrl: './lesson-editor.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -44,14 +58,21 @@ export class LessonEditor {
   protected readonly fieldErrors = signal<readonly FieldError[]>([]);
   protected readonly saving = signal(false);
   protected readonly form = new FormGroup({
-    title: new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.maxLength(200)] }),
+    title: new FormControl('', {
+      nonNullable: true,
+      validators: [Validators.required, Validators.maxLength(200)],
+    }),
     introduction: new FormControl('', { nonNullable: true }),
     systemId: new FormControl('', { nonNullable: true, validators: [Validators.required] }),
     questions: new FormArray<QuestionGroup>([]),
   });
-  private readonly questionValues = toSignal(this.form.controls.questions.valueChanges, { initialValue: [] });
+  private readonly questionValues = toSignal(this.form.controls.questions.valueChanges, {
+    initialValue: [],
+  });
   protected readonly toleranceLabels = computed(() =>
-    this.questionValues().map((q) => (q.kind === 'bed-period' ? '%' : this.units.system() === 'us' ? 'in' : 'cm')),
+    this.questionValues().map((q) =>
+      q.kind === 'bed-period' ? '%' : this.units.system() === 'us' ? 'in' : 'cm',
+    ),
   );
 
   constructor() {
@@ -68,12 +89,19 @@ export class LessonEditor {
     const words = QUESTION_KINDS.find((k) => k.kind === kind);
     const group: QuestionGroup = new FormGroup({
       kind: new FormControl<QuestionKind>(kind, { nonNullable: true }),
-      prompt: new FormControl(words?.prompt ?? '', { nonNullable: true, validators: [Validators.required] }),
+      prompt: new FormControl(words?.prompt ?? '', {
+        nonNullable: true,
+        validators: [Validators.required],
+      }),
       explanation: new FormControl('', { nonNullable: true }),
       target: new FormControl('', { nonNullable: true, validators: [Validators.required] }),
-      tolerance: new FormControl(defaultTolerance(kind, this.units.system()), { nonNullable: true }),
+      tolerance: new FormControl(defaultTolerance(kind, this.units.system()), {
+        nonNullable: true,
+      }),
     });
-    group.controls.kind.valueChanges.subscribe((next) => group.controls.tolerance.setValue(defaultTolerance(next, this.units.system())));
+    group.controls.kind.valueChanges.subscribe((next) =>
+      group.controls.tolerance.setValue(defaultTolerance(next, this.units.system())),
+    );
     this.form.controls.questions.push(group);
   }
 
@@ -86,7 +114,9 @@ export class LessonEditor {
     this.fieldErrors.set([]);
     if (this.form.invalid) {
       this.form.markAllAsTouched();
-      this.problem.set('Give the lesson a title, choose a system, and a part of it for every question.');
+      this.problem.set(
+        'Give the lesson a title, choose a system, and a part of it for every question.',
+      );
       return;
     }
     const value = this.form.getRawValue();
@@ -101,7 +131,8 @@ export class LessonEditor {
       await this.router.navigate(['/classes/lessons', lesson.id]);
     } catch (error: unknown) {
       this.problem.set(problemMessage(error));
-      if (error instanceof HttpErrorResponse) this.fieldErrors.set(readApiError(error.error)?.error.fields ?? []);
+      if (error instanceof HttpErrorResponse)
+        this.fieldErrors.set(readApiError(error.error)?.error.fields ?? []);
     } finally {
       this.saving.set(false);
     }
@@ -118,7 +149,9 @@ export class LessonEditor {
   private async loadParts(systemId: string): Promise<void> {
     if (!systemId) return;
     const system = await this.systemsApi.get(systemId);
-    const vessels = Array.isArray(system.scenario['vessels']) ? (system.scenario['vessels'] as unknown[]) : [];
+    const vessels = Array.isArray(system.scenario['vessels'])
+      ? (system.scenario['vessels'] as unknown[])
+      : [];
     const described = vessels.flatMap((v) => (isVessel(v) ? [v] : []));
     this.parts.set({
       beds: described.filter((v) => v.kind === 'bed').map((v) => v.id),

@@ -3,9 +3,24 @@ import type { UnitSystem } from '../../../../../shared/scenario';
 
 /** The kinds of question an instructor can ask, with the words the editor shows. */
 export const QUESTION_KINDS = [
-  { kind: 'bed-regime', label: 'Will this bed’s siphon start and stop?', target: 'bed', prompt: 'Will the siphon of this bed start, and will it stop again?' },
-  { kind: 'bed-period', label: 'Predict the cycle period', target: 'bed', prompt: 'How long is one flood-and-drain cycle of this bed?' },
-  { kind: 'vessel-low-level', label: 'How low will the tank or sump go?', target: 'store', prompt: 'How low will the water in this tank go?' },
+  {
+    kind: 'bed-regime',
+    label: 'Will this bed’s siphon start and stop?',
+    target: 'bed',
+    prompt: 'Will the siphon of this bed start, and will it stop again?',
+  },
+  {
+    kind: 'bed-period',
+    label: 'Predict the cycle period',
+    target: 'bed',
+    prompt: 'How long is one flood-and-drain cycle of this bed?',
+  },
+  {
+    kind: 'vessel-low-level',
+    label: 'How low will the tank or sump go?',
+    target: 'store',
+    prompt: 'How low will the water in this tank go?',
+  },
 ] as const;
 
 /** A question kind. */
@@ -28,14 +43,28 @@ const REGIME_CHOICES: BedRegime[] = ['cycling', 'spill-stall', 'siphon-lock'];
 /** The editor's drafts as the API's questions, numbered q1, q2…; tolerances in SI. */
 export function toQuestions(drafts: readonly QuestionDraft[], system: UnitSystem): QuestionInput[] {
   return drafts.map((draft, index): QuestionInput => {
-    const base = { id: `q${index + 1}`, prompt: draft.prompt.trim(), explanation: draft.explanation.trim() };
+    const base = {
+      id: `q${index + 1}`,
+      prompt: draft.prompt.trim(),
+      explanation: draft.explanation.trim(),
+    };
     switch (draft.kind) {
       case 'bed-regime':
         return { ...base, kind: 'bed-regime', bedId: draft.target, choices: REGIME_CHOICES };
       case 'bed-period':
-        return { ...base, kind: 'bed-period', bedId: draft.target, tolerance: draft.tolerance / 100 };
+        return {
+          ...base,
+          kind: 'bed-period',
+          bedId: draft.target,
+          tolerance: draft.tolerance / 100,
+        };
       case 'vessel-low-level':
-        return { ...base, kind: 'vessel-low-level', vesselId: draft.target, toleranceM: draft.tolerance * (system === 'us' ? 0.0254 : 0.01) };
+        return {
+          ...base,
+          kind: 'vessel-low-level',
+          vesselId: draft.target,
+          toleranceM: draft.tolerance * (system === 'us' ? 0.0254 : 0.01),
+        };
     }
   });
 }

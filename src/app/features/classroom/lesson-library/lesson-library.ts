@@ -14,7 +14,14 @@ import { problemMessage } from '../problem-message';
 /** `/classes/library`: my lessons in no class; copy one into a class, open, delete, or write a new one. */
 @Component({
   selector: 'tw-lesson-library',
-  imports: [DatePipe, MatButtonModule, MatIconModule, MatMenuModule, MatProgressBarModule, RouterLink],
+  imports: [
+    DatePipe,
+    MatButtonModule,
+    MatIconModule,
+    MatMenuModule,
+    MatProgressBarModule,
+    RouterLink,
+  ],
   templateUrl: './lesson-library.html',
   styleUrl: './lesson-library.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -25,7 +32,9 @@ export class LessonLibrary {
 
   protected readonly lessons = signal<readonly LessonListItem[] | null>(null);
   protected readonly classes = signal<readonly ClassListItem[]>([]);
-  protected readonly teaching = computed(() => this.classes().filter((c) => c.myRole === 'instructor'));
+  protected readonly teaching = computed(() =>
+    this.classes().filter((c) => c.myRole === 'instructor'),
+  );
   protected readonly notice = signal<string | null>(null);
   protected readonly problem = signal<string | null>(null);
 
@@ -36,7 +45,9 @@ export class LessonLibrary {
   protected async copyInto(lesson: LessonListItem, target: ClassListItem): Promise<void> {
     await this.act(async () => {
       await this.api.duplicateLesson(lesson.id, { classId: target.id });
-      this.notice.set(`"${lesson.title}" is now a draft in ${target.name}; publish it there when the class should see it.`);
+      this.notice.set(
+        `"${lesson.title}" is now a draft in ${target.name}; publish it there when the class should see it.`,
+      );
     });
   }
 

@@ -15,7 +15,10 @@ import { StudentLesson } from '../student-lesson/student-lesson';
   imports: [LessonReport, MatIconModule, MatProgressBarModule, RouterLink, StudentLesson],
   template: `
     @if (lesson(); as current) {
-      <a class="back" [routerLink]="current.classId ? ['/classes', current.classId] : ['/classes/library']">
+      <a
+        class="back"
+        [routerLink]="current.classId ? ['/classes', current.classId] : ['/classes/library']"
+      >
         <mat-icon>arrow_back</mat-icon> {{ current.className ?? 'Lesson library' }}
       </a>
       <h1>{{ current.title }}</h1>

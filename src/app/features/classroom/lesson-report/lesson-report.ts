@@ -1,4 +1,13 @@
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, output, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  input,
+  output,
+  signal,
+} from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
@@ -22,7 +31,15 @@ import { questionFindings } from './question-findings';
  */
 @Component({
   selector: 'tw-lesson-report',
-  imports: [MatButtonModule, MatIconModule, MatProgressBarModule, MatSlideToggleModule, PredictionPlot, RouterLink, SimulationSummary],
+  imports: [
+    MatButtonModule,
+    MatIconModule,
+    MatProgressBarModule,
+    MatSlideToggleModule,
+    PredictionPlot,
+    RouterLink,
+    SimulationSummary,
+  ],
   templateUrl: './lesson-report.html',
   styleUrl: './lesson-report.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -47,7 +64,9 @@ export class LessonReport {
     const report = this.report();
     return report ? questionFindings(this.lesson().questions, report, this.system()) : [];
   });
-  protected readonly ranCount = computed(() => this.report()?.answers.filter((a) => a.ranAt !== null).length ?? 0);
+  protected readonly ranCount = computed(
+    () => this.report()?.answers.filter((a) => a.ranAt !== null).length ?? 0,
+  );
   protected readonly rows = computed(() =>
     (this.report()?.answers ?? []).map((answer) => ({
       userId: answer.userId,
@@ -55,7 +74,11 @@ export class LessonReport {
       ran: answer.ranAt !== null,
       cells: this.lesson().questions.map((question) => {
         const outcome = answer.outcomes.find((o) => o.questionId === question.id);
-        return { id: question.id, words: answerWords(question, outcome?.predicted ?? null, this.system()), correct: outcome?.correct ?? null };
+        return {
+          id: question.id,
+          words: answerWords(question, outcome?.predicted ?? null, this.system()),
+          correct: outcome?.correct ?? null,
+        };
       }),
     })),
   );
@@ -69,7 +92,9 @@ export class LessonReport {
   }
 
   protected async setFlag(flag: 'published' | 'revealed', value: boolean): Promise<void> {
-    await this.act(async () => this.changed.emit(await this.api.updateLesson(this.lesson().id, { [flag]: value })));
+    await this.act(async () =>
+      this.changed.emit(await this.api.updateLesson(this.lesson().id, { [flag]: value })),
+    );
   }
 
   protected async copyToLibrary(): Promise<void> {

@@ -1,4 +1,8 @@
-import type { LessonReport, Question, QuestionStats } from '../../../../../shared/contracts/classroom';
+import type {
+  LessonReport,
+  Question,
+  QuestionStats,
+} from '../../../../../shared/contracts/classroom';
 import type { UnitSystem } from '../../../../../shared/scenario';
 import { answerWords, toleranceWords } from '../answer-units';
 
@@ -15,7 +19,11 @@ export interface QuestionFinding {
 }
 
 /** The report's questions with their simulated answers and how many got them right, in words. */
-export function questionFindings(questions: readonly Question[], report: LessonReport, system: UnitSystem): QuestionFinding[] {
+export function questionFindings(
+  questions: readonly Question[],
+  report: LessonReport,
+  system: UnitSystem,
+): QuestionFinding[] {
   return questions.map((question, index) => {
     const key = report.answerKey.find((k) => k.questionId === question.id);
     const stats = report.stats.find((s) => s.questionId === question.id) ?? null;
@@ -34,8 +42,12 @@ export function questionFindings(questions: readonly Question[], report: LessonR
 
 function shareWords(question: Question, stats: QuestionStats | null, system: UnitSystem): string {
   if (!stats || stats.answered === 0) return 'No answers yet.';
-  if (stats.correctShare === null) return `${stats.answered} answered; the run gave no value to compare.`;
+  if (stats.correctShare === null)
+    return `${stats.answered} answered; the run gave no value to compare.`;
   const percent = Math.round(stats.correctShare * 100);
-  const what = question.kind === 'bed-regime' ? 'predicted the regime right' : `within ${toleranceWords(question, system)}`;
+  const what =
+    question.kind === 'bed-regime'
+      ? 'predicted the regime right'
+      : `within ${toleranceWords(question, system)}`;
   return `${stats.correct} of ${stats.answered} ${what} (${percent} %).`;
 }

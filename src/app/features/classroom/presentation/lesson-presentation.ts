@@ -1,4 +1,12 @@
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  input,
+  signal,
+} from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
@@ -72,7 +80,10 @@ export class LessonPresentation {
 
   private async load(lessonId: string): Promise<void> {
     try {
-      const [lesson, report] = await Promise.all([this.api.lesson(lessonId), this.api.report(lessonId)]);
+      const [lesson, report] = await Promise.all([
+        this.api.lesson(lessonId),
+        this.api.report(lessonId),
+      ]);
       this.lesson.set(lesson);
       this.report.set(report);
     } catch (error: unknown) {

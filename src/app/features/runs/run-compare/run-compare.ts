@@ -18,7 +18,7 @@ import type { CompareRow, RunComparison, RunSeries } from '../../../../../shared
 import { readApiError } from '../../../core/http/read-api-error';
 import { TimeSeriesChart } from '../../../ui/time-series-chart/time-series-chart';
 import { UnitPreference } from '../../systems/unit-preference';
-import { compareFigure, metricWords } from '../compare-words';
+import { compareFigure, materiallyChanged, metricWords } from '../compare-words';
 import { chartSet } from '../run-figures';
 import { RunsApi } from '../runs-api';
 import { durationWords, statusWords } from '../verdict-words';
@@ -116,7 +116,7 @@ export class RunCompare {
       a: compareFigure(row.a, row.unit, system),
       b: compareFigure(row.b, row.unit, system),
       delta: compareFigure(row.delta, row.unit, system, true),
-      changed: row.changed,
+      changed: materiallyChanged(row),
     }));
   }
 

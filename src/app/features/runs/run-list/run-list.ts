@@ -123,7 +123,11 @@ export class RunList {
   }
 
   protected async compare(): Promise<void> {
-    const [a, b] = this.selected();
+    // Run A is the older of the two, so B − A reads as "what the change did".
+    const byAge = this.rows()
+      .filter((run) => this.selected().includes(run.id))
+      .sort((x, y) => Date.parse(x.createdAt) - Date.parse(y.createdAt));
+    const [a, b] = byAge.map((run) => run.id);
     if (a && b) await this.router.navigate(['/runs', 'compare'], { queryParams: { a, b } });
   }
 
