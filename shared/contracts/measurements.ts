@@ -189,11 +189,22 @@ export const CsvPreviewSchema = z.object({
 /** A preview. */
 export type CsvPreview = z.infer<typeof CsvPreviewSchema>;
 
+const STOPWATCH_READING = /^(?:(\d+):)?(\d{1,2}):(\d{2}(?:\.\d+)?)$/;
+
+/** A stopwatch reading: "m:ss" or "h:mm:ss(.s)" as a stopwatch shows it, or a time with a unit ("250 s", "4.2 min"). */
+export const StopwatchTimeSchema = z.preprocess((value) => {
+  if (typeof value !== 'string') return value;
+  const m = STOPWATCH_READING.exec(value.trim());
+  return m ? Number(m[1] ?? '0') * 3600 + Number(m[2]) * 60 + Number(m[3]) : value;
+}, quantitySchema('time', 'positive'));
+
 /** One observed cycle of a bed, timed by hand. Marks are levels above the bed floor. */
 export const StopwatchEntrySchema = z.strictObject({
   bed: z.string().trim().min(1).max(100),
-  fillTime: quantitySchema('time', 'positive'),
-  drainTime: quantitySchema('time', 'positive'),
+  /** From the siphon breaking (the bed starts to fill) to the siphon starting. */
+  fillTime: StopwatchTimeSchema,
+  /** From the siphon starting to it breaking. */
+  drainTime: StopwatchTimeSchema,
   highMark: quantitySchema('length', 'nonnegative').optional(),
   lowMark: quantitySchema('length', 'nonnegative').optional(),
 });
