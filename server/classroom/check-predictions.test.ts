@@ -4,12 +4,23 @@ import { checkPredictions } from './check-predictions';
 
 const questions = QuestionListSchema.parse([
   { kind: 'bed-period', id: 'period', prompt: 'Period?', bedId: 'bed' },
-  { kind: 'bed-regime', id: 'regime', prompt: 'Start?', bedId: 'bed', choices: ['cycling', 'spill-stall'] },
+  {
+    kind: 'bed-regime',
+    id: 'regime',
+    prompt: 'Start?',
+    bedId: 'bed',
+    choices: ['cycling', 'spill-stall'],
+  },
 ]);
 
 describe('checkPredictions', () => {
   it('accepts one fitting prediction per question', () => {
-    expect(checkPredictions(questions, [{ questionId: 'period', value: 300 }, { questionId: 'regime', choice: 'cycling' }])).toEqual([]);
+    expect(
+      checkPredictions(questions, [
+        { questionId: 'period', value: 300 },
+        { questionId: 'regime', choice: 'cycling' },
+      ]),
+    ).toEqual([]);
   });
 
   it('names each problem with its path', () => {
@@ -19,7 +30,12 @@ describe('checkPredictions', () => {
       { questionId: 'regime', choice: 'cycling' },
       { questionId: 'nope', value: 1 },
     ]);
-    expect(errors.map((e) => e.path)).toEqual(['predictions[0]', 'predictions[1]', 'predictions[2]', 'predictions[3]']);
+    expect(errors.map((e) => e.path)).toEqual([
+      'predictions[0]',
+      'predictions[1]',
+      'predictions[2]',
+      'predictions[3]',
+    ]);
     expect(errors[0]?.message).toBe('Enter a number.');
     expect(errors[1]?.message).toBe('Pick one of: cycling, spill-stall.');
     expect(errors[2]?.message).toContain('only once');

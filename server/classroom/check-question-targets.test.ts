@@ -2,7 +2,11 @@ import { describe, expect, it } from 'vitest';
 import { QuestionListSchema } from '../../shared/contracts/classroom';
 import { checkQuestionTargets } from './check-question-targets';
 
-const vessels = [{ id: 'tank', kind: 'tank' as const }, { id: 'sump', kind: 'sump' as const }, { id: 'bed-a', kind: 'bed' as const }];
+const vessels = [
+  { id: 'tank', kind: 'tank' as const },
+  { id: 'sump', kind: 'sump' as const },
+  { id: 'bed-a', kind: 'bed' as const },
+];
 
 describe('checkQuestionTargets', () => {
   it('accepts beds for bed questions and tanks or sumps for level questions', () => {
@@ -19,8 +23,14 @@ describe('checkQuestionTargets', () => {
       { kind: 'vessel-low-level', id: 'b', prompt: 'x', vesselId: 'bed-a' },
     ]);
     expect(checkQuestionTargets(questions, { vessels })).toEqual([
-      { path: 'questions[0].bedId', message: 'The system has no bed "tank"; choose one of: bed-a.' },
-      { path: 'questions[1].vesselId', message: 'The system has no tank or sump "bed-a"; choose one of: tank, sump.' },
+      {
+        path: 'questions[0].bedId',
+        message: 'The system has no bed "tank"; choose one of: bed-a.',
+      },
+      {
+        path: 'questions[1].vesselId',
+        message: 'The system has no tank or sump "bed-a"; choose one of: tank, sump.',
+      },
     ]);
   });
 });

@@ -17,10 +17,16 @@ export function checkQuestionTargets(
   questions.forEach((question, index) => {
     if (question.kind === 'vessel-low-level') {
       if (!stores.includes(question.vesselId)) {
-        errors.push({ path: `questions[${index}].vesselId`, message: `The system has no tank or sump "${question.vesselId}"; choose one of: ${stores.join(', ') || 'none'}.` });
+        errors.push({
+          path: `questions[${index}].vesselId`,
+          message: `The system has no tank or sump "${question.vesselId}"; choose one of: ${stores.join(', ') || 'none'}.`,
+        });
       }
     } else if (!beds.includes(question.bedId)) {
-      errors.push({ path: `questions[${index}].bedId`, message: `The system has no bed "${question.bedId}"; choose one of: ${beds.join(', ') || 'none'}.` });
+      errors.push({
+        path: `questions[${index}].bedId`,
+        message: `The system has no bed "${question.bedId}"; choose one of: ${beds.join(', ') || 'none'}.`,
+      });
     }
   });
   return errors;

@@ -28,7 +28,11 @@ export interface StudentRow {
 }
 
 /** Inserts a class taught by `instructorId`. */
-export async function insertClass(db: Database, instructorId: string, name: string): Promise<ClassRow> {
+export async function insertClass(
+  db: Database,
+  instructorId: string,
+  name: string,
+): Promise<ClassRow> {
   const [row] = await db.insert(classes).values({ instructorId, name }).returning();
   if (!row) throw new Error('Inserting a class returned no row.');
   return row;
@@ -45,21 +49,33 @@ export async function deleteClass(db: Database, classId: string): Promise<void> 
 }
 
 /** The class and the caller's part in it, or undefined when the caller neither teaches nor attends it. */
-export async function findClassForUser(db: Database, classId: string, userId: string): Promise<ClassWithRole | undefined> {
+export async function findClassForUser(
+  db: Database,
+  classId: string,
+  userId: string,
+): Promise<ClassWithRole | undefined> {
   const [found] = await db
     .select({ row: classes, instructorName: users.name, memberId: classMembers.userId })
     .from(classes)
     .innerJoin(users, eq(users.id, classes.instructorId))
-    .leftJoin(classMembers, and(eq(classMembers.classId, classes.id), eq(classMembers.userId, userId)))
+    .leftJoin(
+      classMembers,
+      and(eq(classMembers.classId, classes.id), eq(classMembers.userId, userId)),
+    )
     .where(eq(classes.id, classId));
   if (!found) return undefined;
-  if (found.row.instructorId === userId) return { row: found.row, instructorName: found.instructorName, myRole: 'instructor' };
-  if (found.memberId) return { row: found.row, instructorName: found.instructorName, myRole: 'student' };
+  if (found.row.instructorId === userId)
+    return { row: found.row, instructorName: found.instructorName, myRole: 'instructor' };
+  if (found.memberId)
+    return { row: found.row, instructorName: found.instructorName, myRole: 'student' };
   return undefined;
 }
 
 /** The class with its instructor's name, whoever asks (for invitation links). */
-export async function findClassById(db: Database, classId: string): Promise<{ row: ClassRow; instructorName: string } | undefined> {
+export async function findClassById(
+  db: Database,
+  classId: string,
+): Promise<{ row: ClassRow; instructorName: string } | undefined> {
   const [found] = await db
     .select({ row: classes, instructorName: users.name })
     .from(classes)
@@ -70,7 +86,10 @@ export async function findClassById(db: Database, classId: string): Promise<{ ro
 
 /** Classes the user teaches, then those they attend; each newest first, with student and lesson counts. */
 export async function listClassesForUser(db: Database, userId: string): Promise<ClassListRow[]> {
-  const attended = db.select({ id: classMembers.classId }).from(classMembers).where(eq(classMembers.userId, userId));
+  const attended = db
+    .select({ id: classMembers.classId })
+    .from(classMembers)
+    .where(eq(classMembers.userId, userId));
   const rows = await db
     .select({ row: classes, instructorName: users.name })
     .from(classes)
@@ -82,10 +101,20 @@ export async function listClassesForUser(db: Database, userId: string): Promise<
   const published = await countBy(db, ids, 'lessons');
   const list = rows.map(({ row, instructorName }): ClassListRow => {
     const myRole = row.instructorId === userId ? 'instructor' : 'student';
-    const lessonCount = myRole === 'instructor' ? published.all.get(row.id) : published.visible.get(row.id);
-    return { row, instructorName, myRole, studentCount: students.all.get(row.id) ?? 0, lessonCount: lessonCount ?? 0 };
+    const lessonCount =
+      myRole === 'instructor' ? published.all.get(row.id) : published.visible.get(row.id);
+    return {
+      row,
+      instructorName,
+      myRole,
+      studentCount: students.all.get(row.id) ?? 0,
+      lessonCount: lessonCount ?? 0,
+    };
   });
-  return [...list.filter((c) => c.myRole === 'instructor'), ...list.filter((c) => c.myRole === 'student')];
+  return [
+    ...list.filter((c) => c.myRole === 'instructor'),
+    ...list.filter((c) => c.myRole === 'student'),
+  ];
 }
 
 /** Per class: members (all), or lessons (all, and published ones as `visible`). */
@@ -122,7 +151,12 @@ async function countBy(
 /** The students of a class, by name. */
 export async function listStudents(db: Database, classId: string): Promise<StudentRow[]> {
   return db
-    .select({ userId: users.id, name: users.name, email: users.email, joinedAt: classMembers.joinedAt })
+    .select({
+      userId: users.id,
+      name: users.name,
+      email: users.email,
+      joinedAt: classMembers.joinedAt,
+    })
     .from(classMembers)
     .innerJoin(users, eq(users.id, classMembers.userId))
     .where(eq(classMembers.classId, classId))
@@ -131,7 +165,10 @@ export async function listStudents(db: Database, classId: string): Promise<Stude
 
 /** Number of students in a class. */
 export async function countStudents(db: Database, classId: string): Promise<number> {
-  const [row] = await db.select({ n: count() }).from(classMembers).where(eq(classMembers.classId, classId));
+  const [row] = await db
+    .select({ n: count() })
+    .from(classMembers)
+    .where(eq(classMembers.classId, classId));
   return row?.n ?? 0;
 }
 
@@ -141,7 +178,11 @@ export async function addStudent(db: Database, classId: string, userId: string):
 }
 
 /** Removes a student from a class; returns whether they were in it. */
-export async function removeStudent(db: Database, classId: string, userId: string): Promise<boolean> {
+export async function removeStudent(
+  db: Database,
+  classId: string,
+  userId: string,
+): Promise<boolean> {
   const removed = await db
     .delete(classMembers)
     .where(and(eq(classMembers.classId, classId), eq(classMembers.userId, userId)))
@@ -150,7 +191,11 @@ export async function removeStudent(db: Database, classId: string, userId: strin
 }
 
 /** Which of these lower-cased addresses already belong to students of the class. */
-export async function memberEmails(db: Database, classId: string, emails: string[]): Promise<Set<string>> {
+export async function memberEmails(
+  db: Database,
+  classId: string,
+  emails: string[],
+): Promise<Set<string>> {
   if (emails.length === 0) return new Set();
   const rows = await db
     .select({ email: sql<string>`lower(${users.email})` })

@@ -1,5 +1,11 @@
 /** Classes: create, list, read, rename, delete; the roster and removing students. */
-import type { ClassDetail, ClassList, ClassRequest, LessonListItem, Roster } from '../../shared/contracts/classroom';
+import type {
+  ClassDetail,
+  ClassList,
+  ClassRequest,
+  LessonListItem,
+  Roster,
+} from '../../shared/contracts/classroom';
 import type { SessionUser } from '../auth/session-user';
 import type { Database } from '../db/database';
 import { notFound } from '../http/http-error';
@@ -7,7 +13,13 @@ import { requireClass } from './class-access';
 import * as classes from './class-repository';
 import { listOpenInvitations } from './invitation-repository';
 import { invitationStatus } from './invitation-status';
-import { countAnswers, findAnswersOf, listClassLessons, type AnswerRow, type LessonRow } from './lesson-repository';
+import {
+  countAnswers,
+  findAnswersOf,
+  listClassLessons,
+  type AnswerRow,
+  type LessonRow,
+} from './lesson-repository';
 
 /** The caller's classes: those they teach, then those they attend. */
 export async function listClasses(db: Database, user: SessionUser): Promise<ClassList> {
@@ -26,13 +38,21 @@ export async function listClasses(db: Database, user: SessionUser): Promise<Clas
 }
 
 /** Creates a class the caller teaches. */
-export async function createClass(db: Database, user: SessionUser, request: ClassRequest): Promise<ClassDetail> {
+export async function createClass(
+  db: Database,
+  user: SessionUser,
+  request: ClassRequest,
+): Promise<ClassDetail> {
   const row = await classes.insertClass(db, user.id, request.name);
   return getClass(db, user, row.id);
 }
 
 /** A class with its lessons: all of them for its instructor, the published ones for a student. */
-export async function getClass(db: Database, user: SessionUser, classId: string): Promise<ClassDetail> {
+export async function getClass(
+  db: Database,
+  user: SessionUser,
+  classId: string,
+): Promise<ClassDetail> {
   const found = await requireClass(db, user.id, classId, 'member');
   const isInstructor = found.myRole === 'instructor';
   const lessonRows = await listClassLessons(db, classId, !isInstructor);
@@ -52,7 +72,12 @@ export async function getClass(db: Database, user: SessionUser, classId: string)
 }
 
 /** Renames a class (its instructor only). */
-export async function renameClass(db: Database, user: SessionUser, classId: string, request: ClassRequest): Promise<ClassDetail> {
+export async function renameClass(
+  db: Database,
+  user: SessionUser,
+  classId: string,
+  request: ClassRequest,
+): Promise<ClassDetail> {
   await requireClass(db, user.id, classId, 'instructor');
   await classes.renameClass(db, classId, request.name);
   return getClass(db, user, classId);
@@ -65,9 +90,17 @@ export async function deleteClass(db: Database, user: SessionUser, classId: stri
 }
 
 /** The students and the invitations not yet accepted (the class's instructor only). */
-export async function getRoster(db: Database, user: SessionUser, classId: string, now: Date): Promise<Roster> {
+export async function getRoster(
+  db: Database,
+  user: SessionUser,
+  classId: string,
+  now: Date,
+): Promise<Roster> {
   await requireClass(db, user.id, classId, 'instructor');
-  const [students, invitations] = await Promise.all([classes.listStudents(db, classId), listOpenInvitations(db, classId)]);
+  const [students, invitations] = await Promise.all([
+    classes.listStudents(db, classId),
+    listOpenInvitations(db, classId),
+  ]);
   return {
     students: students.map((s) => ({ ...s, joinedAt: s.joinedAt.toISOString() })),
     invitations: invitations.map((i) => ({
@@ -81,15 +114,27 @@ export async function getRoster(db: Database, user: SessionUser, classId: string
 }
 
 /** Removes a student from a class; their answers stay stored but leave the reports. */
-export async function removeStudent(db: Database, user: SessionUser, classId: string, studentId: string): Promise<void> {
+export async function removeStudent(
+  db: Database,
+  user: SessionUser,
+  classId: string,
+  studentId: string,
+): Promise<void> {
   await requireClass(db, user.id, classId, 'instructor');
   const removed = await classes.removeStudent(db, classId, studentId);
   if (!removed) throw notFound('That student');
 }
 
 /** Lesson rows as their instructor lists them. */
-export function toInstructorItems(rows: LessonRow[], answerCounts: Map<string, number>): LessonListItem[] {
-  return rows.map((row) => ({ ...baseItem(row), answerCount: answerCounts.get(row.id) ?? 0, myProgress: null }));
+export function toInstructorItems(
+  rows: LessonRow[],
+  answerCounts: Map<string, number>,
+): LessonListItem[] {
+  return rows.map((row) => ({
+    ...baseItem(row),
+    answerCount: answerCounts.get(row.id) ?? 0,
+    myProgress: null,
+  }));
 }
 
 function toStudentItems(rows: LessonRow[], answers: Map<string, AnswerRow>): LessonListItem[] {

@@ -23,13 +23,17 @@ import * as invitationService from './invitation-service';
 import * as lessonService from './lesson-service';
 
 /** A path parameter as a string (Express types them loosely; a missing one matches nothing). */
-const param = (value: string | string[] | undefined): string => (typeof value === 'string' ? value : '');
+const param = (value: string | string[] | undefined): string =>
+  typeof value === 'string' ? value : '';
 
 /** Roles that may teach: create classes and lessons. */
 const teaches = requireRole('instructor', 'admin');
 
 /** The classroom routes; `deps` replaces what the context would give (tests). */
-export function classroomRouter(ctx: AppContext, deps: ClassroomDeps = classroomDepsFor(ctx)): Router {
+export function classroomRouter(
+  ctx: AppContext,
+  deps: ClassroomDeps = classroomDepsFor(ctx),
+): Router {
   const router = Router();
   const { db } = deps;
 
@@ -37,7 +41,15 @@ export function classroomRouter(ctx: AppContext, deps: ClassroomDeps = classroom
     res.json(await classService.listClasses(db, currentUser(req)));
   });
   router.post('/classes', teaches, async (req, res) => {
-    res.status(201).json(await classService.createClass(db, currentUser(req), parseOr400(ClassRequestSchema, req.body)));
+    res
+      .status(201)
+      .json(
+        await classService.createClass(
+          db,
+          currentUser(req),
+          parseOr400(ClassRequestSchema, req.body),
+        ),
+      );
   });
   router.get('/classes/:classId', requireAuth, async (req, res) => {
     res.json(await classService.getClass(db, currentUser(req), param(req.params.classId)));
@@ -51,18 +63,39 @@ export function classroomRouter(ctx: AppContext, deps: ClassroomDeps = classroom
     res.status(204).end();
   });
   router.get('/classes/:classId/roster', requireAuth, async (req, res) => {
-    res.json(await classService.getRoster(db, currentUser(req), param(req.params.classId), deps.now()));
+    res.json(
+      await classService.getRoster(db, currentUser(req), param(req.params.classId), deps.now()),
+    );
   });
   router.delete('/classes/:classId/students/:studentId', requireAuth, async (req, res) => {
-    await classService.removeStudent(db, currentUser(req), param(req.params.classId), param(req.params.studentId));
+    await classService.removeStudent(
+      db,
+      currentUser(req),
+      param(req.params.classId),
+      param(req.params.studentId),
+    );
     res.status(204).end();
   });
   router.post('/classes/:classId/invitations', requireAuth, async (req, res) => {
     const body = parseOr400(InviteRequestSchema, req.body);
-    res.status(201).json(await invitationService.inviteStudents(deps, currentUser(req), param(req.params.classId), body));
+    res
+      .status(201)
+      .json(
+        await invitationService.inviteStudents(
+          deps,
+          currentUser(req),
+          param(req.params.classId),
+          body,
+        ),
+      );
   });
   router.delete('/classes/:classId/invitations/:invitationId', requireAuth, async (req, res) => {
-    await invitationService.revokeInvitation(deps, currentUser(req), param(req.params.classId), param(req.params.invitationId));
+    await invitationService.revokeInvitation(
+      deps,
+      currentUser(req),
+      param(req.params.classId),
+      param(req.params.invitationId),
+    );
     res.status(204).end();
   });
 
@@ -70,7 +103,9 @@ export function classroomRouter(ctx: AppContext, deps: ClassroomDeps = classroom
     res.json(await invitationService.previewInvitation(deps, param(req.params.token)));
   });
   router.post('/invitations/:token/accept', requireAuth, async (req, res) => {
-    res.json(await invitationService.acceptInvitation(deps, currentUser(req), param(req.params.token)));
+    res.json(
+      await invitationService.acceptInvitation(deps, currentUser(req), param(req.params.token)),
+    );
   });
 
   mountLessonRoutes(router, deps);
@@ -82,14 +117,24 @@ function mountLessonRoutes(router: Router, deps: ClassroomDeps): void {
     res.json(await lessonService.listLibrary(deps, currentUser(req)));
   });
   router.post('/lessons', teaches, async (req, res) => {
-    res.status(201).json(await lessonService.createLesson(deps, currentUser(req), parseOr400(CreateLessonRequestSchema, req.body)));
+    res
+      .status(201)
+      .json(
+        await lessonService.createLesson(
+          deps,
+          currentUser(req),
+          parseOr400(CreateLessonRequestSchema, req.body),
+        ),
+      );
   });
   router.get('/lessons/:lessonId', requireAuth, async (req, res) => {
     res.json(await lessonService.getLesson(deps, currentUser(req), param(req.params.lessonId)));
   });
   router.patch('/lessons/:lessonId', requireAuth, async (req, res) => {
     const body = parseOr400(UpdateLessonRequestSchema, req.body);
-    res.json(await lessonService.updateLesson(deps, currentUser(req), param(req.params.lessonId), body));
+    res.json(
+      await lessonService.updateLesson(deps, currentUser(req), param(req.params.lessonId), body),
+    );
   });
   router.delete('/lessons/:lessonId', requireAuth, async (req, res) => {
     await lessonService.deleteLesson(deps, currentUser(req), param(req.params.lessonId));
@@ -97,15 +142,33 @@ function mountLessonRoutes(router: Router, deps: ClassroomDeps): void {
   });
   router.post('/lessons/:lessonId/duplicate', requireAuth, async (req, res) => {
     const body = parseOr400(DuplicateLessonRequestSchema, req.body ?? {});
-    res.status(201).json(await lessonService.duplicateLesson(deps, currentUser(req), param(req.params.lessonId), body));
+    res
+      .status(201)
+      .json(
+        await lessonService.duplicateLesson(
+          deps,
+          currentUser(req),
+          param(req.params.lessonId),
+          body,
+        ),
+      );
   });
   // A student's actions name the lesson assigned to them (same ids, a different part in it).
   router.put('/lessons/:assignedLessonId/answer', requireAuth, async (req, res) => {
     const body = parseOr400(AnswerRequestSchema, req.body);
-    res.json(await answerService.saveAnswer(deps, currentUser(req), param(req.params.assignedLessonId), body));
+    res.json(
+      await answerService.saveAnswer(
+        deps,
+        currentUser(req),
+        param(req.params.assignedLessonId),
+        body,
+      ),
+    );
   });
   router.post('/lessons/:assignedLessonId/run', requireAuth, async (req, res) => {
-    res.json(await answerService.runLesson(deps, currentUser(req), param(req.params.assignedLessonId)));
+    res.json(
+      await answerService.runLesson(deps, currentUser(req), param(req.params.assignedLessonId)),
+    );
   });
   router.get('/lessons/:lessonId/report', requireAuth, async (req, res) => {
     res.json(await answerService.getReport(deps, currentUser(req), param(req.params.lessonId)));

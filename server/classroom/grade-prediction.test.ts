@@ -2,9 +2,26 @@ import { describe, expect, it } from 'vitest';
 import { QuestionSchema, type Question } from '../../shared/contracts/classroom';
 import { gradePrediction } from './grade-prediction';
 
-const period: Question = QuestionSchema.parse({ kind: 'bed-period', id: 'p', prompt: 'Period?', bedId: 'bed-a', tolerance: 0.2 });
-const regime: Question = QuestionSchema.parse({ kind: 'bed-regime', id: 'r', prompt: 'Will it start?', bedId: 'bed-a' });
-const low: Question = QuestionSchema.parse({ kind: 'vessel-low-level', id: 'l', prompt: 'How low?', vesselId: 'tank', toleranceM: 0.03 });
+const period: Question = QuestionSchema.parse({
+  kind: 'bed-period',
+  id: 'p',
+  prompt: 'Period?',
+  bedId: 'bed-a',
+  tolerance: 0.2,
+});
+const regime: Question = QuestionSchema.parse({
+  kind: 'bed-regime',
+  id: 'r',
+  prompt: 'Will it start?',
+  bedId: 'bed-a',
+});
+const low: Question = QuestionSchema.parse({
+  kind: 'vessel-low-level',
+  id: 'l',
+  prompt: 'How low?',
+  vesselId: 'tank',
+  toleranceM: 0.03,
+});
 
 describe('gradePrediction', () => {
   it.each([
@@ -24,10 +41,20 @@ describe('gradePrediction', () => {
   });
 
   it('grades a regime by equality and gives no difference', () => {
-    const right = gradePrediction(regime, { questionId: 'r', choice: 'spill-stall' }, 'spill-stall');
+    const right = gradePrediction(
+      regime,
+      { questionId: 'r', choice: 'spill-stall' },
+      'spill-stall',
+    );
     const wrong = gradePrediction(regime, { questionId: 'r', choice: 'cycling' }, 'spill-stall');
     expect([right.correct, right.difference]).toEqual([true, null]);
-    expect(wrong).toEqual({ questionId: 'r', predicted: 'cycling', simulated: 'spill-stall', correct: false, difference: null });
+    expect(wrong).toEqual({
+      questionId: 'r',
+      predicted: 'cycling',
+      simulated: 'spill-stall',
+      correct: false,
+      difference: null,
+    });
   });
 
   it('leaves an answer ungraded when either side is missing', () => {

@@ -20,7 +20,8 @@ export function invitationMail(facts: InvitationMailFacts): OutgoingMail {
     `${facts.instructorName} invites you to the class "${facts.className}" on Tidewright, where you predict how flood-and-drain grow beds behave and then run the simulation to see who was right.`,
     `Open this link within ${facts.validDays} days to join. If you have no Tidewright account yet, the page lets you make one with this address:`,
   ];
-  const closing = 'If you do not know this class, ignore this e-mail: nothing happens unless you open the link.';
+  const closing =
+    'If you do not know this class, ignore this e-mail: nothing happens unless you open the link.';
   const text = [...paragraphs, '', facts.link, '', closing].join('\n\n').replace(/\n{3,}/g, '\n\n');
   const html = [
     ...paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`),

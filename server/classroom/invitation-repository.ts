@@ -31,8 +31,14 @@ export async function replaceInvitation(
 }
 
 /** The invitation whose token hashes to `tokenHash`, if any. */
-export async function findInvitationByTokenHash(db: Database, tokenHash: string): Promise<InvitationRow | undefined> {
-  const [row] = await db.select().from(classInvitations).where(eq(classInvitations.tokenHash, tokenHash));
+export async function findInvitationByTokenHash(
+  db: Database,
+  tokenHash: string,
+): Promise<InvitationRow | undefined> {
+  const [row] = await db
+    .select()
+    .from(classInvitations)
+    .where(eq(classInvitations.tokenHash, tokenHash));
   return row;
 }
 
@@ -46,7 +52,12 @@ export async function listOpenInvitations(db: Database, classId: string): Promis
 }
 
 /** Marks an invitation accepted by `userId`. */
-export async function markAccepted(db: Database, invitationId: string, userId: string, at: Date): Promise<void> {
+export async function markAccepted(
+  db: Database,
+  invitationId: string,
+  userId: string,
+  at: Date,
+): Promise<void> {
   await db
     .update(classInvitations)
     .set({ acceptedAt: at, acceptedBy: userId })
@@ -54,7 +65,11 @@ export async function markAccepted(db: Database, invitationId: string, userId: s
 }
 
 /** Deletes one invitation of a class; returns whether it existed. */
-export async function deleteInvitation(db: Database, classId: string, invitationId: string): Promise<boolean> {
+export async function deleteInvitation(
+  db: Database,
+  classId: string,
+  invitationId: string,
+): Promise<boolean> {
   const removed = await db
     .delete(classInvitations)
     .where(and(eq(classInvitations.classId, classId), eq(classInvitations.id, invitationId)))

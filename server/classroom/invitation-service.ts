@@ -26,10 +26,19 @@ export const INVITATION_VALID_DAYS = 14;
 const DAY_MS = 24 * 3600 * 1000;
 
 const invalidLink = (): HttpError =>
-  new HttpError(404, 'INVITATION_NOT_FOUND', 'This invitation link is not valid (perhaps a newer one replaced it); ask your instructor to invite you again.');
+  new HttpError(
+    404,
+    'INVITATION_NOT_FOUND',
+    'This invitation link is not valid (perhaps a newer one replaced it); ask your instructor to invite you again.',
+  );
 
 /** E-mails an invitation to each address not already in the class. */
-export async function inviteStudents(deps: ClassroomDeps, user: SessionUser, classId: string, request: InviteRequest): Promise<InviteResult> {
+export async function inviteStudents(
+  deps: ClassroomDeps,
+  user: SessionUser,
+  classId: string,
+  request: InviteRequest,
+): Promise<InviteResult> {
   const found = await requireClass(deps.db, user.id, classId, 'instructor');
   const emails = [...new Set(request.emails)];
   const members = await memberEmails(deps.db, classId, emails);
@@ -38,31 +47,72 @@ export async function inviteStudents(deps: ClassroomDeps, user: SessionUser, cla
   for (const email of emails.filter((e) => !alreadyMembers.includes(e))) {
     const { token, tokenHash } = newInvitationToken();
     const expiresAt = new Date(deps.now().getTime() + INVITATION_VALID_DAYS * DAY_MS);
-    const row = await invitations.replaceInvitation(deps.db, { classId, email, tokenHash, expiresAt });
+    const row = await invitations.replaceInvitation(deps.db, {
+      classId,
+      email,
+      tokenHash,
+      expiresAt,
+    });
     const link = `${deps.publicUrl}/join/${token}`;
     try {
-      await deps.mailer.send(invitationMail({ to: email, instructorName: user.name, className: found.row.name, link, validDays: INVITATION_VALID_DAYS }));
+      await deps.mailer.send(
+        invitationMail({
+          to: email,
+          instructorName: user.name,
+          className: found.row.name,
+          link,
+          validDays: INVITATION_VALID_DAYS,
+        }),
+      );
     } catch {
       await invitations.deleteInvitation(deps.db, classId, row.id);
-      const sent = invited.length > 0 ? ` Invitations to ${invited.map((i) => i.email).join(', ')} were sent.` : '';
-      throw new HttpError(502, 'MAIL_FAILED', `The mail server refused the invitation to ${email}; check the address and try again.${sent}`);
+      const sent =
+        invited.length > 0
+          ? ` Invitations to ${invited.map((i) => i.email).join(', ')} were sent.`
+          : '';
+      throw new HttpError(
+        502,
+        'MAIL_FAILED',
+        `The mail server refused the invitation to ${email}; check the address and try again.${sent}`,
+      );
     }
-    invited.push({ id: row.id, email, status: 'open', createdAt: row.createdAt.toISOString(), expiresAt: row.expiresAt.toISOString() });
+    invited.push({
+      id: row.id,
+      email,
+      status: 'open',
+      createdAt: row.createdAt.toISOString(),
+      expiresAt: row.expiresAt.toISOString(),
+    });
   }
   return { invited, alreadyMembers };
 }
 
 /** Withdraws an invitation not yet accepted (the class's instructor only). */
-export async function revokeInvitation(deps: ClassroomDeps, user: SessionUser, classId: string, invitationId: string): Promise<void> {
+export async function revokeInvitation(
+  deps: ClassroomDeps,
+  user: SessionUser,
+  classId: string,
+  invitationId: string,
+): Promise<void> {
   await requireClass(deps.db, user.id, classId, 'instructor');
   const open = await invitations.listOpenInvitations(deps.db, classId);
-  if (!open.some((i) => i.id === invitationId) || !(await invitations.deleteInvitation(deps.db, classId, invitationId))) {
-    throw new HttpError(404, 'NOT_FOUND', 'That invitation was not found (or was already accepted).');
+  if (
+    !open.some((i) => i.id === invitationId) ||
+    !(await invitations.deleteInvitation(deps.db, classId, invitationId))
+  ) {
+    throw new HttpError(
+      404,
+      'NOT_FOUND',
+      'That invitation was not found (or was already accepted).',
+    );
   }
 }
 
 /** What an invitation link offers; anyone holding the link may ask. */
-export async function previewInvitation(deps: ClassroomDeps, token: string): Promise<InvitationPreview> {
+export async function previewInvitation(
+  deps: ClassroomDeps,
+  token: string,
+): Promise<InvitationPreview> {
   const { invitation, klass } = await loadByToken(deps, token);
   const account = await findUserByEmail(deps.db, invitation.email);
   return {
@@ -79,18 +129,40 @@ export async function previewInvitation(deps: ClassroomDeps, token: string): Pro
  * harmless; an expired link answers 410 `INVITATION_EXPIRED`, another address 403
  * `INVITATION_FOR_OTHER_ADDRESS`, a link accepted by someone else 409 `INVITATION_USED`.
  */
-export async function acceptInvitation(deps: ClassroomDeps, user: SessionUser, token: string): Promise<AcceptInvitationResult> {
+export async function acceptInvitation(
+  deps: ClassroomDeps,
+  user: SessionUser,
+  token: string,
+): Promise<AcceptInvitationResult> {
   const { invitation, klass } = await loadByToken(deps, token);
   const result = { classId: klass.row.id, className: klass.row.name };
   if (invitation.acceptedBy === user.id) return result;
-  if (invitation.acceptedAt) throw new HttpError(409, 'INVITATION_USED', 'This invitation was already used; ask your instructor to invite you again.');
+  if (invitation.acceptedAt)
+    throw new HttpError(
+      409,
+      'INVITATION_USED',
+      'This invitation was already used; ask your instructor to invite you again.',
+    );
   if (invitation.email !== user.email.toLowerCase()) {
-    throw new HttpError(403, 'INVITATION_FOR_OTHER_ADDRESS', `This invitation is for ${invitation.email}, but you are signed in as ${user.email}. Sign out and sign in (or register) with ${invitation.email}.`);
+    throw new HttpError(
+      403,
+      'INVITATION_FOR_OTHER_ADDRESS',
+      `This invitation is for ${invitation.email}, but you are signed in as ${user.email}. Sign out and sign in (or register) with ${invitation.email}.`,
+    );
   }
   if (invitationStatus(invitation, deps.now()) === 'expired') {
-    throw new HttpError(410, 'INVITATION_EXPIRED', 'This invitation has expired; ask your instructor to invite you again.');
+    throw new HttpError(
+      410,
+      'INVITATION_EXPIRED',
+      'This invitation has expired; ask your instructor to invite you again.',
+    );
   }
-  if (klass.row.instructorId === user.id) throw new HttpError(409, 'ALREADY_INSTRUCTOR', 'You teach this class, so you cannot join it as a student.');
+  if (klass.row.instructorId === user.id)
+    throw new HttpError(
+      409,
+      'ALREADY_INSTRUCTOR',
+      'You teach this class, so you cannot join it as a student.',
+    );
   await addStudent(deps.db, klass.row.id, user.id);
   await invitations.markAccepted(deps.db, invitation.id, user.id, deps.now());
   return result;
@@ -98,7 +170,10 @@ export async function acceptInvitation(deps: ClassroomDeps, user: SessionUser, t
 
 async function loadByToken(deps: ClassroomDeps, token: string) {
   if (!/^[A-Za-z0-9_-]{20,100}$/.test(token)) throw invalidLink();
-  const invitation = await invitations.findInvitationByTokenHash(deps.db, hashInvitationToken(token));
+  const invitation = await invitations.findInvitationByTokenHash(
+    deps.db,
+    hashInvitationToken(token),
+  );
   const klass = invitation ? await findClassById(deps.db, invitation.classId) : undefined;
   if (!invitation || !klass) throw invalidLink();
   return { invitation, klass };

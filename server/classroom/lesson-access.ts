@@ -31,12 +31,20 @@ export async function requireLesson(
   if (!myRole) throw notFound('That lesson');
   if (need === 'owner' && myRole !== 'instructor') throw notClassInstructor();
   if (need === 'student' && myRole !== 'student') {
-    throw new HttpError(403, 'STUDENTS_ONLY', 'Only students answer lessons; the lesson report shows the simulated answers.');
+    throw new HttpError(
+      403,
+      'STUDENTS_ONLY',
+      'Only students answer lessons; the lesson report shows the simulated answers.',
+    );
   }
   return { ...found, myRole };
 }
 
-async function roleIn(db: Database, lesson: LessonWithClass, userId: string): Promise<'instructor' | 'student' | null> {
+async function roleIn(
+  db: Database,
+  lesson: LessonWithClass,
+  userId: string,
+): Promise<'instructor' | 'student' | null> {
   if (lesson.row.ownerId === userId) return 'instructor';
   const { classId, published } = lesson.row;
   if (classId && published && (await isStudentOf(db, classId, userId))) return 'student';

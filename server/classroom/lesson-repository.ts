@@ -8,7 +8,10 @@ export type LessonRow = typeof lessons.$inferSelect;
 /** A row of `lesson_answers`. */
 export type AnswerRow = typeof lessonAnswers.$inferSelect;
 /** The columns a new lesson needs. */
-export type NewLesson = Pick<typeof lessons.$inferInsert, 'ownerId' | 'classId' | 'title' | 'introduction' | 'scenario' | 'questions'>;
+export type NewLesson = Pick<
+  typeof lessons.$inferInsert,
+  'ownerId' | 'classId' | 'title' | 'introduction' | 'scenario' | 'questions'
+>;
 
 /** A lesson with the name of its class (null in the library) and that class's instructor. */
 export interface LessonWithClass {
@@ -25,7 +28,10 @@ export async function insertLesson(db: Database, values: NewLesson): Promise<Les
 }
 
 /** The lesson with its class's name and instructor, if it exists. */
-export async function findLesson(db: Database, lessonId: string): Promise<LessonWithClass | undefined> {
+export async function findLesson(
+  db: Database,
+  lessonId: string,
+): Promise<LessonWithClass | undefined> {
   const [found] = await db
     .select({ row: lessons, className: classes.name, instructorId: classes.instructorId })
     .from(lessons)
@@ -47,7 +53,9 @@ export async function isStudentOf(db: Database, classId: string, userId: string)
 export async function updateLesson(
   db: Database,
   lessonId: string,
-  changes: Partial<Pick<LessonRow, 'title' | 'introduction' | 'questions' | 'published' | 'revealed'>>,
+  changes: Partial<
+    Pick<LessonRow, 'title' | 'introduction' | 'questions' | 'published' | 'revealed'>
+  >,
 ): Promise<LessonRow> {
   const [row] = await db
     .update(lessons)
@@ -73,7 +81,11 @@ export async function listLibrary(db: Database, ownerId: string): Promise<Lesson
 }
 
 /** A class's lessons (only published ones when `publishedOnly`), oldest first like a syllabus. */
-export async function listClassLessons(db: Database, classId: string, publishedOnly: boolean): Promise<LessonRow[]> {
+export async function listClassLessons(
+  db: Database,
+  classId: string,
+  publishedOnly: boolean,
+): Promise<LessonRow[]> {
   const where = publishedOnly
     ? and(eq(lessons.classId, classId), eq(lessons.published, true))
     : eq(lessons.classId, classId);
@@ -81,7 +93,10 @@ export async function listClassLessons(db: Database, classId: string, publishedO
 }
 
 /** Per lesson: answers from current students of the lesson's class (library lessons count none). */
-export async function countAnswers(db: Database, lessonIds: string[]): Promise<Map<string, number>> {
+export async function countAnswers(
+  db: Database,
+  lessonIds: string[],
+): Promise<Map<string, number>> {
   const counts = new Map<string, number>();
   if (lessonIds.length === 0) return counts;
   const rows = await db
@@ -100,12 +115,19 @@ export async function countAnswers(db: Database, lessonIds: string[]): Promise<M
 
 /** Whether anyone has answered the lesson. */
 export async function hasAnswers(db: Database, lessonId: string): Promise<boolean> {
-  const [row] = await db.select({ n: count() }).from(lessonAnswers).where(eq(lessonAnswers.lessonId, lessonId));
+  const [row] = await db
+    .select({ n: count() })
+    .from(lessonAnswers)
+    .where(eq(lessonAnswers.lessonId, lessonId));
   return (row?.n ?? 0) > 0;
 }
 
 /** One user's answers to the given lessons, by lesson id. */
-export async function findAnswersOf(db: Database, userId: string, lessonIds: string[]): Promise<Map<string, AnswerRow>> {
+export async function findAnswersOf(
+  db: Database,
+  userId: string,
+  lessonIds: string[],
+): Promise<Map<string, AnswerRow>> {
   const found = new Map<string, AnswerRow>();
   if (lessonIds.length === 0) return found;
   const rows = await db
@@ -117,7 +139,12 @@ export async function findAnswersOf(db: Database, userId: string, lessonIds: str
 }
 
 /** Saves a user's predictions (replacing earlier ones) and clears any earlier run. */
-export async function upsertPredictions(db: Database, lessonId: string, userId: string, answers: unknown): Promise<AnswerRow> {
+export async function upsertPredictions(
+  db: Database,
+  lessonId: string,
+  userId: string,
+  answers: unknown,
+): Promise<AnswerRow> {
   const now = new Date();
   const [row] = await db
     .insert(lessonAnswers)
@@ -132,7 +159,12 @@ export async function upsertPredictions(db: Database, lessonId: string, userId: 
 }
 
 /** Stores the result of a user's run of a lesson. */
-export async function saveResults(db: Database, answerId: string, results: unknown, ranAt: Date): Promise<AnswerRow> {
+export async function saveResults(
+  db: Database,
+  answerId: string,
+  results: unknown,
+  ranAt: Date,
+): Promise<AnswerRow> {
   const [row] = await db
     .update(lessonAnswers)
     .set({ results, ranAt })
@@ -152,7 +184,10 @@ export async function listClassAnswers(
     .select({ answer: lessonAnswers, name: users.name })
     .from(lessonAnswers)
     .innerJoin(users, eq(users.id, lessonAnswers.userId))
-    .innerJoin(classMembers, and(eq(classMembers.classId, lesson.classId), eq(classMembers.userId, lessonAnswers.userId)))
+    .innerJoin(
+      classMembers,
+      and(eq(classMembers.classId, lesson.classId), eq(classMembers.userId, lessonAnswers.userId)),
+    )
     .where(eq(lessonAnswers.lessonId, lesson.id))
     .orderBy(asc(users.name));
 }

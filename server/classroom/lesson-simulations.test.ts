@@ -4,10 +4,20 @@ import { HttpError } from '../http/http-error';
 import type { RunJobOutcome } from '../runs/run-worker-messages';
 import { LessonSimulations, type SubmitRun } from './lesson-simulations';
 
-const completed: RunJobOutcome = { status: 'completed', error: null, result: null, series: null, sampleCount: 0, wallMs: 1 };
+const completed: RunJobOutcome = {
+  status: 'completed',
+  error: null,
+  result: null,
+  series: null,
+  sampleCount: 0,
+  wallMs: 1,
+};
 
 /** A submit function that records each job and answers with the next outcome given. */
-function recordingSubmit(outcomes: RunJobOutcome[]): { submit: SubmitRun; jobs: Parameters<SubmitRun>[0][] } {
+function recordingSubmit(outcomes: RunJobOutcome[]): {
+  submit: SubmitRun;
+  jobs: Parameters<SubmitRun>[0][];
+} {
   const jobs: Parameters<SubmitRun>[0][] = [];
   const submit: SubmitRun = async (job) => {
     jobs.push(job);
@@ -29,7 +39,10 @@ describe('LessonSimulations', () => {
   it('runs a lesson once however often and however concurrently it is asked for', async () => {
     const { submit, jobs } = recordingSubmit([]);
     const simulations = new LessonSimulations(submit);
-    await Promise.all([simulations.get('a', EXAMPLE_SCENARIO_FILE), simulations.get('a', EXAMPLE_SCENARIO_FILE)]);
+    await Promise.all([
+      simulations.get('a', EXAMPLE_SCENARIO_FILE),
+      simulations.get('a', EXAMPLE_SCENARIO_FILE),
+    ]);
     await simulations.get('a', EXAMPLE_SCENARIO_FILE);
     expect(jobs).toHaveLength(1);
   });
@@ -59,9 +72,14 @@ describe('LessonSimulations', () => {
     const full = new LessonSimulations(() => {
       throw new Error('The server already has 20 runs waiting; try again in a minute.');
     });
-    await expect(full.get('a', EXAMPLE_SCENARIO_FILE)).rejects.toMatchObject({ status: 503, code: 'RUN_QUEUE_FULL' });
+    await expect(full.get('a', EXAMPLE_SCENARIO_FILE)).rejects.toMatchObject({
+      status: 503,
+      code: 'RUN_QUEUE_FULL',
+    });
     const invalid = new LessonSimulations(recordingSubmit([]).submit);
-    const error: unknown = await invalid.get('b', { format: 'scenario/1' }).catch((e: unknown) => e);
+    const error: unknown = await invalid
+      .get('b', { format: 'scenario/1' })
+      .catch((e: unknown) => e);
     expect(error).toBeInstanceOf(HttpError);
     expect(error).toMatchObject({ status: 422, code: 'LESSON_SCENARIO_INVALID' });
   });

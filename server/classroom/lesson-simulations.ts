@@ -11,7 +11,11 @@ import type { RunJobOptions, RunJobOutcome } from '../runs/run-worker-messages';
 import { toLessonSimulation } from './to-lesson-simulation';
 
 /** Runs one normalised scenario off the event loop (the run pool's `submit`). */
-export type SubmitRun = (job: { id: string; scenario: unknown; options: RunJobOptions }) => Promise<RunJobOutcome>;
+export type SubmitRun = (job: {
+  id: string;
+  scenario: unknown;
+  options: RunJobOptions;
+}) => Promise<RunJobOutcome>;
 
 /** Most samples a lesson run may record (a 24 h run at a 1 s interval fits). */
 const MAX_SAMPLES = 100_000;
@@ -38,7 +42,8 @@ export class LessonSimulations {
     while (this.cache.size > this.capacity) this.cache.delete(this.cache.keys().next().value ?? '');
     running.then(
       (simulation) => {
-        if (simulation.status === 'failed' || simulation.status === 'cancelled') this.cache.delete(lessonId);
+        if (simulation.status === 'failed' || simulation.status === 'cancelled')
+          this.cache.delete(lessonId);
       },
       () => this.cache.delete(lessonId),
     );
@@ -54,10 +59,18 @@ export class LessonSimulations {
     const parsed = parseScenario(scenarioDocument);
     if (!parsed.success) {
       const first = parsed.issues[0];
-      throw new HttpError(422, 'LESSON_SCENARIO_INVALID', `The lesson's system is no longer valid (${first?.path}: ${first?.message}); duplicate the lesson from a valid system.`);
+      throw new HttpError(
+        422,
+        'LESSON_SCENARIO_INVALID',
+        `The lesson's system is no longer valid (${first?.path}: ${first?.message}); duplicate the lesson from a valid system.`,
+      );
     }
     const { run } = parsed.scenario;
-    const options: RunJobOptions = { durationS: run.duration, outputIntervalS: run.outputInterval, maxSamples: MAX_SAMPLES };
+    const options: RunJobOptions = {
+      durationS: run.duration,
+      outputIntervalS: run.outputInterval,
+      maxSamples: MAX_SAMPLES,
+    };
     let outcome: RunJobOutcome;
     try {
       outcome = await this.submit({ id: randomUUID(), scenario: parsed.scenario, options });

@@ -19,14 +19,25 @@ describe('seedClassroomDemo', () => {
     const ids = await seedDemo(t.ctx.db, [seedClassroomDemo]);
     await seedDemo(t.ctx.db, [seedClassroomDemo]);
     const teacherId = ids['teacher@tidewright.test'];
-    const rows = await t.ctx.db.select().from(lessons).where(eq(lessons.ownerId, teacherId ?? ''));
+    const rows = await t.ctx.db
+      .select()
+      .from(lessons)
+      .where(eq(lessons.ownerId, teacherId ?? ''));
     const library = rows.filter((l) => l.classId === null);
     const inClass = rows.filter((l) => l.classId !== null);
     expect(library.map((l) => l.title).sort()).toEqual(STARTER_LESSONS.map((s) => s.title).sort());
-    expect(inClass.map((l) => [l.title, l.published]).sort()).toEqual(STARTER_LESSONS.map((s) => [s.title, true]).sort());
-    const demoClasses = await t.ctx.db.select().from(classes).where(eq(classes.name, DEMO_CLASS_NAME));
+    expect(inClass.map((l) => [l.title, l.published]).sort()).toEqual(
+      STARTER_LESSONS.map((s) => [s.title, true]).sort(),
+    );
+    const demoClasses = await t.ctx.db
+      .select()
+      .from(classes)
+      .where(eq(classes.name, DEMO_CLASS_NAME));
     expect(demoClasses.map((c) => c.instructorId)).toEqual([teacherId]);
-    const [members] = await t.ctx.db.select({ n: count() }).from(classMembers).where(eq(classMembers.userId, ids['demo@tidewright.test'] ?? ''));
+    const [members] = await t.ctx.db
+      .select({ n: count() })
+      .from(classMembers)
+      .where(eq(classMembers.userId, ids['demo@tidewright.test'] ?? ''));
     expect(members?.n).toBe(1);
   });
 });

@@ -25,14 +25,28 @@ export const DEMO_CLASS_NAME = 'Greenhouse physics (demo class)';
 function lessonValues(starter: StarterLesson, ownerId: string, classId: string | null) {
   const scenario = starterScenario(starter);
   const parsed = parseScenario(scenario);
-  if (!parsed.success) throw new Error(`Starter lesson "${starter.title}": ${JSON.stringify(parsed.issues)}`);
+  if (!parsed.success)
+    throw new Error(`Starter lesson "${starter.title}": ${JSON.stringify(parsed.issues)}`);
   const questions = QuestionListSchema.parse(starter.questions);
   const errors = checkQuestionTargets(questions, parsed.scenario);
-  if (errors.length > 0) throw new Error(`Starter lesson "${starter.title}": ${JSON.stringify(errors)}`);
-  return { ownerId, classId, title: starter.title, introduction: starter.introduction, scenario, questions };
+  if (errors.length > 0)
+    throw new Error(`Starter lesson "${starter.title}": ${JSON.stringify(errors)}`);
+  return {
+    ownerId,
+    classId,
+    title: starter.title,
+    introduction: starter.introduction,
+    scenario,
+    questions,
+  };
 }
 
-async function ensureLesson(db: Database, starter: StarterLesson, ownerId: string, classId: string | null): Promise<void> {
+async function ensureLesson(
+  db: Database,
+  starter: StarterLesson,
+  ownerId: string,
+  classId: string | null,
+): Promise<void> {
   const inPlace = classId === null ? isNull(lessons.classId) : eq(lessons.classId, classId);
   const [existing] = await db
     .select({ id: lessons.id })

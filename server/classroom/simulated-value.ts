@@ -6,13 +6,18 @@ import type { LessonSimulation, Question, SimulatedValue } from '../../shared/co
  * lowest level (m above its floor). Null when the run has no such figure (e.g. a bed that never
  * completed a cycle has no period).
  */
-export function simulatedValue(question: Question, simulation: Pick<LessonSimulation, 'beds' | 'vessels'>): SimulatedValue {
+export function simulatedValue(
+  question: Question,
+  simulation: Pick<LessonSimulation, 'beds' | 'vessels'>,
+): SimulatedValue {
   switch (question.kind) {
     case 'bed-period':
       return simulation.beds.find((bed) => bed.id === question.bedId)?.periodMean_s ?? null;
     case 'bed-regime':
       return simulation.beds.find((bed) => bed.id === question.bedId)?.state ?? null;
     case 'vessel-low-level':
-      return simulation.vessels.find((vessel) => vessel.id === question.vesselId)?.minLevel_m ?? null;
+      return (
+        simulation.vessels.find((vessel) => vessel.id === question.vesselId)?.minLevel_m ?? null
+      );
   }
 }

@@ -10,9 +10,17 @@ function run(title: string) {
   const parsed = parseScenario(starterScenario(starter));
   if (!parsed.success) throw new Error(JSON.stringify(parsed.issues));
   const { run: settings } = parsed.scenario;
-  const outcome = simulate(parsed.scenario, { durationS: settings.duration, outputIntervalS: settings.outputInterval, maxSamples: 100_000 });
+  const outcome = simulate(parsed.scenario, {
+    durationS: settings.duration,
+    outputIntervalS: settings.outputInterval,
+    maxSamples: 100_000,
+  });
   expect(outcome.status).toBe('completed');
-  return { scenario: parsed.scenario, summary: outcome.result.summary.beds, vessels: outcome.result.summary.vessels };
+  return {
+    scenario: parsed.scenario,
+    summary: outcome.result.summary.beds,
+    vessels: outcome.result.summary.vessels,
+  };
 }
 
 // The explanations of the starter lessons state what the model does; these checks keep them true.
@@ -35,7 +43,10 @@ describe('the starter lessons tell what the engine computes', () => {
     const sumpLow = vessels.find((v) => v.id === 'sump')?.minLevel_m ?? Number.NaN;
     expect((sump?.initialLevel ?? 0) - sumpLow).toBeGreaterThan(0.2);
     expect(sumpLow).toBeGreaterThan(intake);
-    expect(vessels.find((v) => v.id === 'tank')?.minLevel_m).toBeCloseTo(scenario.vessels.find((v) => v.id === 'tank')?.initialLevel ?? 0, 3);
+    expect(vessels.find((v) => v.id === 'tank')?.minLevel_m).toBeCloseTo(
+      scenario.vessels.find((v) => v.id === 'tank')?.initialLevel ?? 0,
+      3,
+    );
     expect(summary.find((b) => b.id === 'bed-south')?.state).toBe('cycling');
   });
 });

@@ -21,7 +21,10 @@ const QuestionsSchema = z.array(QuestionSchema);
 const PredictionsSchema = z.array(PredictionSchema);
 
 /** What `lesson_answers.results` holds once the student ran the lesson. */
-export const StoredResultsSchema = z.object({ simulation: LessonSimulationSchema, outcomes: z.array(OutcomeSchema) });
+export const StoredResultsSchema = z.object({
+  simulation: LessonSimulationSchema,
+  outcomes: z.array(OutcomeSchema),
+});
 /** What `lesson_answers.results` holds. */
 export type StoredResults = { simulation: LessonSimulation; outcomes: Outcome[] };
 
@@ -42,7 +45,10 @@ export function storedPredictions(row: Pick<AnswerRow, 'id' | 'answers'>): Predi
 
 /** An answer row as its student sees it. */
 export function toMyAnswer(row: AnswerRow): MyAnswer {
-  const results = row.results === null ? null : parseStored(StoredResultsSchema, row.results, `lesson_answers.results of ${row.id}`);
+  const results =
+    row.results === null
+      ? null
+      : parseStored(StoredResultsSchema, row.results, `lesson_answers.results of ${row.id}`);
   return {
     predictions: storedPredictions(row),
     submittedAt: row.submittedAt.toISOString(),
@@ -54,6 +60,7 @@ export function toMyAnswer(row: AnswerRow): MyAnswer {
 
 function parseStored<S extends z.ZodType>(schema: S, value: unknown, where: string): z.output<S> {
   const parsed = schema.safeParse(value);
-  if (!parsed.success) throw new Error(`Stored ${where} does not match its schema: ${parsed.error.message}`);
+  if (!parsed.success)
+    throw new Error(`Stored ${where} does not match its schema: ${parsed.error.message}`);
   return parsed.data;
 }

@@ -26,6 +26,11 @@ export function toLessonSimulation(outcome: RunJobOutcome, durationS: number): L
 function levelChannels(blob: Uint8Array): LessonSimulation['levels'] {
   const decoded = decodeSeries(blob);
   const levels = decoded.channels.filter((c) => c.kind === 'level').map((c) => c.id);
-  const picked = seriesToJson(selectSeries(decoded, { channels: levels.join(','), maxPoints: LESSON_LEVEL_MAX_POINTS }));
-  return { t_s: picked.t_s, channels: picked.channels.map((c) => ({ where: c.where, values: c.values })) };
+  const picked = seriesToJson(
+    selectSeries(decoded, { channels: levels.join(','), maxPoints: LESSON_LEVEL_MAX_POINTS }),
+  );
+  return {
+    t_s: picked.t_s,
+    channels: picked.channels.map((c) => ({ where: c.where, values: c.values })),
+  };
 }

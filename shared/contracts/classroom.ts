@@ -131,7 +131,9 @@ export const InviteRequestSchema = z.strictObject({
   emails: z
     .array(EmailSchema)
     .min(1, { error: 'Name at least one e-mail address.' })
-    .max(MAX_INVITES_PER_REQUEST, { error: `Invite at most ${MAX_INVITES_PER_REQUEST} people at a time.` }),
+    .max(MAX_INVITES_PER_REQUEST, {
+      error: `Invite at most ${MAX_INVITES_PER_REQUEST} people at a time.`,
+    }),
 });
 /** Addresses to invite. */
 export type InviteRequest = z.infer<typeof InviteRequestSchema>;
@@ -174,7 +176,9 @@ const QuestionIdSchema = z
   .regex(/^[a-z0-9][a-z0-9-]{0,39}$/, { error: 'Use 1–40 lower-case letters, digits and dashes.' });
 const PromptSchema = z.string().trim().min(1, { error: 'Write the question.' }).max(500);
 const ExplanationSchema = z.string().trim().max(2000).default('');
-const TargetIdSchema = z.string().min(1, { error: 'Choose which part of the system the question is about.' });
+const TargetIdSchema = z
+  .string()
+  .min(1, { error: 'Choose which part of the system the question is about.' });
 
 /** "Predict the cycle period of this bed": a number of seconds, right within ± `tolerance` (fraction). */
 export const BedPeriodQuestionSchema = z.strictObject({
@@ -196,7 +200,9 @@ export const BedRegimeQuestionSchema = z.strictObject({
   choices: z
     .array(BedRegimeSchema)
     .min(2, { error: 'Offer at least two choices.' })
-    .refine((choices) => new Set(choices).size === choices.length, { error: 'Offer each choice once.' })
+    .refine((choices) => new Set(choices).size === choices.length, {
+      error: 'Offer each choice once.',
+    })
     .default(['cycling', 'spill-stall', 'siphon-lock']),
 });
 
@@ -229,7 +235,12 @@ export const QuestionListSchema = z
   .superRefine((questions, ctx) => {
     const seen = new Set<string>();
     questions.forEach((question, index) => {
-      if (seen.has(question.id)) ctx.addIssue({ code: 'custom', path: [index, 'id'], message: 'Each question needs its own id.' });
+      if (seen.has(question.id))
+        ctx.addIssue({
+          code: 'custom',
+          path: [index, 'id'],
+          message: 'Each question needs its own id.',
+        });
       seen.add(question.id);
     });
   });
@@ -290,7 +301,10 @@ export const NumberPredictionSchema = z.strictObject({
   value: z.number().finite().nonnegative(),
 });
 /** A predicted regime. */
-export const ChoicePredictionSchema = z.strictObject({ questionId: z.string(), choice: BedRegimeSchema });
+export const ChoicePredictionSchema = z.strictObject({
+  questionId: z.string(),
+  choice: BedRegimeSchema,
+});
 /** One prediction: a number or a choice, matching its question's kind. */
 export const PredictionSchema = z.union([NumberPredictionSchema, ChoicePredictionSchema]);
 /** One prediction. */
@@ -300,7 +314,9 @@ export type Prediction = z.infer<typeof PredictionSchema>;
  * `PUT /api/lessons/:id/answer` (a student of the lesson's class): one prediction per question.
  * Allowed until the student runs the lesson (then 409 `ANSWER_LOCKED`).
  */
-export const AnswerRequestSchema = z.strictObject({ predictions: z.array(PredictionSchema).max(10) });
+export const AnswerRequestSchema = z.strictObject({
+  predictions: z.array(PredictionSchema).max(10),
+});
 /** A student's predictions. */
 export type AnswerRequest = z.infer<typeof AnswerRequestSchema>;
 

@@ -49,8 +49,14 @@ describe('lessons', () => {
     app = createApp(t.ctx);
     const signedIn = await signedInClient(app, t.ctx, { role: 'instructor' });
     teacher = signedIn.client;
-    const students = await Promise.all(['Sam', 'Kim'].map((name) => createTestUser(t.ctx, { name })));
-    classId = await makeClass(t.ctx, signedIn.user.id, students.map((s) => s.user.id));
+    const students = await Promise.all(
+      ['Sam', 'Kim'].map((name) => createTestUser(t.ctx, { name })),
+    );
+    classId = await makeClass(
+      t.ctx,
+      signedIn.user.id,
+      students.map((s) => s.user.id),
+    );
     const clients = await Promise.all(
       students.map(async ({ user, password }) => {
         const client = await TestClient.create(app);
@@ -67,50 +73,94 @@ describe('lessons', () => {
   });
 
   async function publishedLesson(): Promise<Lesson> {
-    const created = LessonSchema.parse((await teacher.post('/api/lessons').send(lessonRequest())).body);
-    const copy = LessonSchema.parse((await teacher.post(`/api/lessons/${created.id}/duplicate`).send({ classId })).body);
-    return LessonSchema.parse((await teacher.patch(`/api/lessons/${copy.id}`).send({ published: true })).body);
+    const created = LessonSchema.parse(
+      (await teacher.post('/api/lessons').send(lessonRequest())).body,
+    );
+    const copy = LessonSchema.parse(
+      (await teacher.post(`/api/lessons/${created.id}/duplicate`).send({ classId })).body,
+    );
+    return LessonSchema.parse(
+      (await teacher.patch(`/api/lessons/${copy.id}`).send({ published: true })).body,
+    );
   }
 
   it('keeps a lesson in the library until it is copied into a class, unpublished', async () => {
-    const res = await teacher.post('/api/lessons').send(lessonRequest({ title: 'Why sumps need reserve' }));
+    const res = await teacher
+      .post('/api/lessons')
+      .send(lessonRequest({ title: 'Why sumps need reserve' }));
     expect(res.status).toBe(201);
     const lesson = LessonSchema.parse(res.body);
-    expect([lesson.classId, lesson.published, lesson.myRole, lesson.questions[0]?.kind]).toEqual([null, false, 'instructor', 'bed-period']);
+    expect([lesson.classId, lesson.published, lesson.myRole, lesson.questions[0]?.kind]).toEqual([
+      null,
+      false,
+      'instructor',
+      'bed-period',
+    ]);
     const library = LessonListSchema.parse((await teacher.get('/api/lessons')).body);
     expect(library.items.map((l) => l.id)).toContain(lesson.id);
 
     const publish = await teacher.patch(`/api/lessons/${lesson.id}`).send({ published: true });
     expect([publish.status, errorOf(publish.body).code]).toEqual([409, 'LESSON_NOT_IN_CLASS']);
 
-    const copy = LessonSchema.parse((await teacher.post(`/api/lessons/${lesson.id}/duplicate`).send({ classId })).body);
-    expect([copy.classId, copy.published, copy.title, copy.className]).toEqual([classId, false, 'Why sumps need reserve', 'Greenhouse class']);
+    const copy = LessonSchema.parse(
+      (await teacher.post(`/api/lessons/${lesson.id}/duplicate`).send({ classId })).body,
+    );
+    expect([copy.classId, copy.published, copy.title, copy.className]).toEqual([
+      classId,
+      false,
+      'Why sumps need reserve',
+      'Greenhouse class',
+    ]);
     expect(copy.scenario).toEqual(lesson.scenario);
-    expect(ClassDetailSchema.parse((await sam.get(`/api/classes/${classId}`)).body).lessons.map((l) => l.id)).not.toContain(copy.id);
+    expect(
+      ClassDetailSchema.parse((await sam.get(`/api/classes/${classId}`)).body).lessons.map(
+        (l) => l.id,
+      ),
+    ).not.toContain(copy.id);
   });
 
   it('copies the scenario of a system the instructor can read, and refuses one of somebody else', async () => {
-    const system = SystemSchema.parse((await teacher.post('/api/systems').send({ name: 'Bench unit', scenario: LESSON_SCENARIO })).body);
-    const fromSystem = await teacher.post('/api/lessons').send(lessonRequest({ scenario: undefined, systemId: system.id }));
+    const system = SystemSchema.parse(
+      (await teacher.post('/api/systems').send({ name: 'Bench unit', scenario: LESSON_SCENARIO }))
+        .body,
+    );
+    const fromSystem = await teacher
+      .post('/api/lessons')
+      .send(lessonRequest({ scenario: undefined, systemId: system.id }));
     expect(fromSystem.status, JSON.stringify(fromSystem.body)).toBe(201);
     expect(LessonSchema.parse(fromSystem.body).scenario).toEqual(system.scenario);
     const { client: stranger } = await signedInClient(app, t.ctx, { role: 'instructor' });
-    const refused = await stranger.post('/api/lessons').send(lessonRequest({ scenario: undefined, systemId: system.id }));
+    const refused = await stranger
+      .post('/api/lessons')
+      .send(lessonRequest({ scenario: undefined, systemId: system.id }));
     expect(refused.status).toBe(404);
   });
 
   it('names questions about parts the system lacks, and problems in the scenario', async () => {
-    const badTarget = await teacher.post('/api/lessons').send(
-      lessonRequest({ questions: [{ kind: 'vessel-low-level', id: 'low', prompt: 'How low?', vesselId: 'bed-a' }] }),
-    );
+    const badTarget = await teacher
+      .post('/api/lessons')
+      .send(
+        lessonRequest({
+          questions: [
+            { kind: 'vessel-low-level', id: 'low', prompt: 'How low?', vesselId: 'bed-a' },
+          ],
+        }),
+      );
     expect(badTarget.status).toBe(400);
     expect(errorOf(badTarget.body).fields).toEqual([
-      { path: 'questions[0].vesselId', message: 'The system has no tank or sump "bed-a"; choose one of: tank.' },
+      {
+        path: 'questions[0].vesselId',
+        message: 'The system has no tank or sump "bed-a"; choose one of: tank.',
+      },
     ]);
-    const badScenario = await teacher.post('/api/lessons').send(lessonRequest({ scenario: { ...LESSON_SCENARIO, vessels: 'none' } }));
+    const badScenario = await teacher
+      .post('/api/lessons')
+      .send(lessonRequest({ scenario: { ...LESSON_SCENARIO, vessels: 'none' } }));
     expect(badScenario.status).toBe(400);
     expect(errorOf(badScenario.body).fields?.[0]?.path).toBe('scenario.vessels');
-    const both = await teacher.post('/api/lessons').send(lessonRequest({ systemId: '00000000-0000-4000-8000-000000000000' }));
+    const both = await teacher
+      .post('/api/lessons')
+      .send(lessonRequest({ systemId: '00000000-0000-4000-8000-000000000000' }));
     expect(errorOf(both.body).fields?.map((f) => f.path)).toEqual(['scenario']);
   });
 
@@ -119,28 +169,43 @@ describe('lessons', () => {
     const early = await sam.post(`/api/lessons/${lesson.id}/run`);
     expect([early.status, errorOf(early.body).code]).toEqual([409, 'PREDICT_FIRST']);
 
-    const incomplete = await sam.put(`/api/lessons/${lesson.id}/answer`).send({ predictions: SAM.slice(0, 1) });
+    const incomplete = await sam
+      .put(`/api/lessons/${lesson.id}/answer`)
+      .send({ predictions: SAM.slice(0, 1) });
     expect(incomplete.status).toBe(400);
     expect(errorOf(incomplete.body).fields?.map((f) => f.message)).toEqual([
       'Answer question "regime" before saving.',
       'Answer question "low" before saving.',
     ]);
 
-    const saved = MyAnswerSchema.parse((await sam.put(`/api/lessons/${lesson.id}/answer`).send({ predictions: SAM })).body);
+    const saved = MyAnswerSchema.parse(
+      (await sam.put(`/api/lessons/${lesson.id}/answer`).send({ predictions: SAM })).body,
+    );
     expect([saved.ranAt, saved.simulation]).toEqual([null, null]);
     const ran = await sam.post(`/api/lessons/${lesson.id}/run`);
     expect(ran.status, JSON.stringify(ran.body)).toBe(200);
     const answer = MyAnswerSchema.parse(ran.body);
     expect(answer.simulation?.status).toBe('completed');
-    expect(answer.simulation?.levels.channels.map((c) => c.where).sort()).toEqual(['bed-a', 'tank']);
+    expect(answer.simulation?.levels.channels.map((c) => c.where).sort()).toEqual([
+      'bed-a',
+      'tank',
+    ]);
     const byId = new Map(answer.outcomes?.map((o) => [o.questionId, o]));
-    expect(byId.get('regime')).toMatchObject({ predicted: 'cycling', simulated: 'cycling', correct: true });
+    expect(byId.get('regime')).toMatchObject({
+      predicted: 'cycling',
+      simulated: 'cycling',
+      correct: true,
+    });
     const period = byId.get('period');
     // The one-bed example at 1 h cycles a few times an hour; 480 s is within 20 % of it.
     expect(period?.simulated).toBeGreaterThan(300);
     expect(period?.simulated).toBeLessThan(900);
-    expect(period?.correct).toBe(Math.abs(480 - Number(period?.simulated)) <= 0.2 * Number(period?.simulated));
-    expect(byId.get('low')?.simulated).toBe(answer.simulation?.vessels.find((v) => v.id === 'tank')?.minLevel_m);
+    expect(period?.correct).toBe(
+      Math.abs(480 - Number(period?.simulated)) <= 0.2 * Number(period?.simulated),
+    );
+    expect(byId.get('low')?.simulated).toBe(
+      answer.simulation?.vessels.find((v) => v.id === 'tank')?.minLevel_m,
+    );
 
     const locked = await sam.put(`/api/lessons/${lesson.id}/answer`).send({ predictions: KIM });
     expect([locked.status, errorOf(locked.body).code]).toEqual([409, 'ANSWER_LOCKED']);
@@ -148,7 +213,11 @@ describe('lessons', () => {
     expect(again.ranAt).toBe(answer.ranAt);
     const seen = LessonSchema.parse((await sam.get(`/api/lessons/${lesson.id}`)).body);
     expect(seen.myAnswer?.outcomes).toEqual(answer.outcomes);
-    expect(ClassDetailSchema.parse((await sam.get(`/api/classes/${classId}`)).body).lessons.find((l) => l.id === lesson.id)?.myProgress).toBe('ran');
+    expect(
+      ClassDetailSchema.parse((await sam.get(`/api/classes/${classId}`)).body).lessons.find(
+        (l) => l.id === lesson.id,
+      )?.myProgress,
+    ).toBe('ran');
   });
 
   it("shows the instructor every student's predictions against the simulated values, with the share right", async () => {
@@ -173,7 +242,9 @@ describe('lessons', () => {
     expect(kimLow?.correct).toBe(false);
     expect(kimLow?.difference).toBeCloseTo(0.2 - Number(key.get('low')), 12);
 
-    const edit = await teacher.patch(`/api/lessons/${lesson.id}`).send({ questions: [{ kind: 'bed-regime', id: 'x', prompt: 'New?', bedId: 'bed-a' }] });
+    const edit = await teacher
+      .patch(`/api/lessons/${lesson.id}`)
+      .send({ questions: [{ kind: 'bed-regime', id: 'x', prompt: 'New?', bedId: 'bed-a' }] });
     expect([edit.status, errorOf(edit.body).code]).toEqual([409, 'LESSON_HAS_ANSWERS']);
   });
 
@@ -196,10 +267,14 @@ describe('lessons', () => {
     const lee = await TestClient.create(app);
     await lee.signIn(user.email, password);
     await lee.put(`/api/lessons/${lesson.id}/answer`).send({ predictions: SAM });
-    const withLee = LessonReportSchema.parse((await teacher.get(`/api/lessons/${lesson.id}/report`)).body);
+    const withLee = LessonReportSchema.parse(
+      (await teacher.get(`/api/lessons/${lesson.id}/report`)).body,
+    );
     expect(withLee.answers.map((a) => a.name)).toContain('Lee');
     expect((await teacher.delete(`/api/classes/${classId}/students/${user.id}`)).status).toBe(204);
-    const without = LessonReportSchema.parse((await teacher.get(`/api/lessons/${lesson.id}/report`)).body);
+    const without = LessonReportSchema.parse(
+      (await teacher.get(`/api/lessons/${lesson.id}/report`)).body,
+    );
     expect(without.answers.map((a) => a.name)).not.toContain('Lee');
     expect(without.rosterSize).toBe(withLee.rosterSize - 1);
   });

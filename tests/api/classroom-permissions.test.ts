@@ -14,7 +14,14 @@ import { TestClient, createTestUser } from '../../server/testing/test-client';
 import { createTestContext, type TestContext } from '../../server/testing/test-context';
 import { makeClass, makeLesson } from './classroom-fixtures';
 
-const ACTORS = ['instructor', 'student', 'removedStudent', 'otherStudent', 'otherInstructor', 'admin'] as const;
+const ACTORS = [
+  'instructor',
+  'student',
+  'removedStudent',
+  'otherStudent',
+  'otherInstructor',
+  'admin',
+] as const;
 type Actor = (typeof ACTORS)[number];
 
 const PREDICTIONS = [
@@ -45,9 +52,25 @@ interface Row {
 }
 
 const ROWS: Row[] = [
-  { action: 'read the class', method: 'get', path: (w) => `/api/classes/${w.classId}`, expect: { instructor: 200, student: 200 } },
-  { action: 'rename the class', method: 'patch', path: (w) => `/api/classes/${w.classId}`, body: { name: 'Spring term' }, expect: { instructor: 200, student: 403 } },
-  { action: 'see the roster', method: 'get', path: (w) => `/api/classes/${w.classId}/roster`, expect: { instructor: 200, student: 403 } },
+  {
+    action: 'read the class',
+    method: 'get',
+    path: (w) => `/api/classes/${w.classId}`,
+    expect: { instructor: 200, student: 200 },
+  },
+  {
+    action: 'rename the class',
+    method: 'patch',
+    path: (w) => `/api/classes/${w.classId}`,
+    body: { name: 'Spring term' },
+    expect: { instructor: 200, student: 403 },
+  },
+  {
+    action: 'see the roster',
+    method: 'get',
+    path: (w) => `/api/classes/${w.classId}/roster`,
+    expect: { instructor: 200, student: 403 },
+  },
   {
     action: 'invite students',
     method: 'post',
@@ -61,11 +84,38 @@ const ROWS: Row[] = [
     path: async (w) => `/api/classes/${w.classId}/students/${await w.spareStudent()}`,
     expect: { instructor: 204, student: 403 },
   },
-  { action: 'read a published lesson', method: 'get', path: (w) => `/api/lessons/${w.lessonId}`, expect: { instructor: 200, student: 200 } },
-  { action: 'read a draft lesson', method: 'get', path: (w) => `/api/lessons/${w.draftLessonId}`, expect: { instructor: 200 } },
-  { action: 'edit a lesson', method: 'patch', path: (w) => `/api/lessons/${w.lessonId}`, body: { title: 'Why the siphon starts' }, expect: { instructor: 200, student: 403 } },
-  { action: 'copy a lesson', method: 'post', path: (w) => `/api/lessons/${w.lessonId}/duplicate`, body: {}, expect: { instructor: 201, student: 403 } },
-  { action: "see the class's answers", method: 'get', path: (w) => `/api/lessons/${w.lessonId}/report`, expect: { instructor: 200, student: 403 } },
+  {
+    action: 'read a published lesson',
+    method: 'get',
+    path: (w) => `/api/lessons/${w.lessonId}`,
+    expect: { instructor: 200, student: 200 },
+  },
+  {
+    action: 'read a draft lesson',
+    method: 'get',
+    path: (w) => `/api/lessons/${w.draftLessonId}`,
+    expect: { instructor: 200 },
+  },
+  {
+    action: 'edit a lesson',
+    method: 'patch',
+    path: (w) => `/api/lessons/${w.lessonId}`,
+    body: { title: 'Why the siphon starts' },
+    expect: { instructor: 200, student: 403 },
+  },
+  {
+    action: 'copy a lesson',
+    method: 'post',
+    path: (w) => `/api/lessons/${w.lessonId}/duplicate`,
+    body: {},
+    expect: { instructor: 201, student: 403 },
+  },
+  {
+    action: "see the class's answers",
+    method: 'get',
+    path: (w) => `/api/lessons/${w.lessonId}/report`,
+    expect: { instructor: 200, student: 403 },
+  },
   {
     action: 'answer a lesson',
     method: 'put',
@@ -73,8 +123,19 @@ const ROWS: Row[] = [
     body: { predictions: PREDICTIONS },
     expect: { instructor: 403, student: 200 },
   },
-  { action: 'answer a draft lesson', method: 'put', path: (w) => `/api/lessons/${w.draftLessonId}/answer`, body: { predictions: PREDICTIONS }, expect: { instructor: 403 } },
-  { action: 'run a lesson', method: 'post', path: (w) => `/api/lessons/${w.runLessonId}/run`, expect: { instructor: 403, student: 200 } },
+  {
+    action: 'answer a draft lesson',
+    method: 'put',
+    path: (w) => `/api/lessons/${w.draftLessonId}/answer`,
+    body: { predictions: PREDICTIONS },
+    expect: { instructor: 403 },
+  },
+  {
+    action: 'run a lesson',
+    method: 'post',
+    path: (w) => `/api/lessons/${w.runLessonId}/run`,
+    expect: { instructor: 403, student: 200 },
+  },
 ];
 
 describe('classroom permissions', () => {
@@ -102,11 +163,19 @@ describe('classroom permissions', () => {
       await clients[actor].signIn(user.email, password);
     }
     const classId = await makeClass(t.ctx, ids.instructor, [ids.student, ids.removedStudent]);
-    const otherClassId = await makeClass(t.ctx, ids.otherInstructor, [ids.otherStudent], 'Another class');
+    const otherClassId = await makeClass(
+      t.ctx,
+      ids.otherInstructor,
+      [ids.otherStudent],
+      'Another class',
+    );
     const lessonId = await makeLesson(t.ctx, ids.instructor, classId);
     const runLessonId = await makeLesson(t.ctx, ids.instructor, classId);
-    for (const actor of ['student', 'removedStudent'] as const) await upsertPredictions(t.ctx.db, runLessonId, ids[actor], PREDICTIONS);
-    const removal = await clients.instructor.delete(`/api/classes/${classId}/students/${ids.removedStudent}`);
+    for (const actor of ['student', 'removedStudent'] as const)
+      await upsertPredictions(t.ctx.db, runLessonId, ids[actor], PREDICTIONS);
+    const removal = await clients.instructor.delete(
+      `/api/classes/${classId}/students/${ids.removedStudent}`,
+    );
     expect(removal.status).toBe(204);
     world = {
       classId,
@@ -126,18 +195,27 @@ describe('classroom permissions', () => {
     await t.close();
   });
 
-  const cases = ROWS.flatMap((row) => ACTORS.map((actor) => [row.action, actor, row.expect[actor] ?? 404, row] as const));
+  const cases = ROWS.flatMap((row) =>
+    ACTORS.map((actor) => [row.action, actor, row.expect[actor] ?? 404, row] as const),
+  );
   it.each(cases)('%s as %s answers %i', async (_action, actor, status, row) => {
     const path = await row.path(world);
     const request = clients[actor].send(row.method, path);
     const res = await (row.body === undefined ? request : request.send(row.body as object));
     expect(res.status, JSON.stringify(res.body)).toBe(status);
     if (status === 404) expect(ApiErrorSchema.parse(res.body).error.code).toBe('NOT_FOUND');
-    if (status === 403) expect(['NOT_CLASS_INSTRUCTOR', 'STUDENTS_ONLY']).toContain(ApiErrorSchema.parse(res.body).error.code);
+    if (status === 403)
+      expect(['NOT_CLASS_INSTRUCTOR', 'STUDENTS_ONLY']).toContain(
+        ApiErrorSchema.parse(res.body).error.code,
+      );
   });
 
   it('lists each user only the classes they teach or attend', async () => {
-    const listed = async (actor: Actor) => ClassListSchema.parse((await clients[actor].get('/api/classes')).body).items.map((c) => [c.id, c.myRole]);
+    const listed = async (actor: Actor) =>
+      ClassListSchema.parse((await clients[actor].get('/api/classes')).body).items.map((c) => [
+        c.id,
+        c.myRole,
+      ]);
     expect(await listed('instructor')).toEqual([[world.classId, 'instructor']]);
     expect(await listed('student')).toEqual([[world.classId, 'student']]);
     expect(await listed('otherInstructor')).toEqual([[world.otherClassId, 'instructor']]);
@@ -149,7 +227,9 @@ describe('classroom permissions', () => {
   it("shows a student only their own answer, never another student's", async () => {
     const res = await clients.removedStudent.get(`/api/lessons/${world.runLessonId}`);
     expect(res.status).toBe(404);
-    const mine = LessonSchema.parse((await clients.student.get(`/api/lessons/${world.runLessonId}`)).body);
+    const mine = LessonSchema.parse(
+      (await clients.student.get(`/api/lessons/${world.runLessonId}`)).body,
+    );
     expect(mine.myRole).toBe('student');
     expect(mine.myAnswer?.predictions).toEqual(PREDICTIONS);
     expect(JSON.stringify(mine)).not.toContain(world.ids.removedStudent);

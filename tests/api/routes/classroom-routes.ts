@@ -20,17 +20,26 @@ const ANSWER = {
   ],
 };
 const teaches = ['instructor', 'admin'] as const;
-const owned = (need: 'read' | 'write' | 'owner'): RouteCase['ownership'] => ({ need, shareable: false });
+const owned = (need: 'read' | 'write' | 'owner'): RouteCase['ownership'] => ({
+  need,
+  shareable: false,
+});
 
 /** Classes, rosters, invitations, lessons, answers and reports. */
 export const classroomRoutes: RouteGroup = {
   name: 'classroom',
   fixture: async (f) => {
     const { user: student } = await createTestUser(f.ctx, { name: 'Student' });
-    const { user: otherTeacher } = await createTestUser(f.ctx, { role: 'instructor', name: 'Other teacher' });
+    const { user: otherTeacher } = await createTestUser(f.ctx, {
+      role: 'instructor',
+      name: 'Other teacher',
+    });
     const classId = await makeClass(f.ctx, f.owner.id, [student.id]);
     await makeInvitation(f.ctx, classId, 'invited@example.test');
-    const [invitation] = await f.ctx.db.select().from(classInvitations).where(eq(classInvitations.classId, classId));
+    const [invitation] = await f.ctx.db
+      .select()
+      .from(classInvitations)
+      .where(eq(classInvitations.classId, classId));
     const attended = await makeClass(f.ctx, otherTeacher.id, [f.owner.id], 'Attended class');
     const joinable = await makeClass(f.ctx, otherTeacher.id, [], 'Joinable class');
     const assignedLessonId = await makeLesson(f.ctx, otherTeacher.id, attended);
@@ -46,12 +55,49 @@ export const classroomRoutes: RouteGroup = {
   },
   routes: [
     { method: 'get', path: '/api/classes', access: 'signed-in', okStatus: 200 },
-    { method: 'post', path: '/api/classes', access: teaches, body: () => ({ name: 'Spring term' }), okStatus: 201 },
-    { method: 'get', path: '/api/classes/:classId', access: 'signed-in', ownership: owned('read'), okStatus: 200 },
-    { method: 'patch', path: '/api/classes/:classId', access: 'signed-in', ownership: owned('owner'), body: () => ({ name: 'Renamed' }), okStatus: 200 },
-    { method: 'delete', path: '/api/classes/:classId', access: 'signed-in', ownership: owned('owner'), okStatus: 204 },
-    { method: 'get', path: '/api/classes/:classId/roster', access: 'signed-in', ownership: owned('owner'), okStatus: 200 },
-    { method: 'delete', path: '/api/classes/:classId/students/:studentId', access: 'signed-in', ownership: owned('owner'), okStatus: 204 },
+    {
+      method: 'post',
+      path: '/api/classes',
+      access: teaches,
+      body: () => ({ name: 'Spring term' }),
+      okStatus: 201,
+    },
+    {
+      method: 'get',
+      path: '/api/classes/:classId',
+      access: 'signed-in',
+      ownership: owned('read'),
+      okStatus: 200,
+    },
+    {
+      method: 'patch',
+      path: '/api/classes/:classId',
+      access: 'signed-in',
+      ownership: owned('owner'),
+      body: () => ({ name: 'Renamed' }),
+      okStatus: 200,
+    },
+    {
+      method: 'delete',
+      path: '/api/classes/:classId',
+      access: 'signed-in',
+      ownership: owned('owner'),
+      okStatus: 204,
+    },
+    {
+      method: 'get',
+      path: '/api/classes/:classId/roster',
+      access: 'signed-in',
+      ownership: owned('owner'),
+      okStatus: 200,
+    },
+    {
+      method: 'delete',
+      path: '/api/classes/:classId/students/:studentId',
+      access: 'signed-in',
+      ownership: owned('owner'),
+      okStatus: 204,
+    },
     {
       method: 'post',
       path: '/api/classes/:classId/invitations',
@@ -60,16 +106,60 @@ export const classroomRoutes: RouteGroup = {
       body: () => ({ emails: ['new-student@example.test'] }),
       okStatus: 201,
     },
-    { method: 'delete', path: '/api/classes/:classId/invitations/:invitationId', access: 'signed-in', ownership: owned('owner'), okStatus: 204 },
+    {
+      method: 'delete',
+      path: '/api/classes/:classId/invitations/:invitationId',
+      access: 'signed-in',
+      ownership: owned('owner'),
+      okStatus: 204,
+    },
     { method: 'get', path: '/api/invitations/:token', access: 'public', okStatus: 200 },
     { method: 'post', path: '/api/invitations/:token/accept', access: 'signed-in', okStatus: 200 },
     { method: 'get', path: '/api/lessons', access: teaches, okStatus: 200 },
-    { method: 'post', path: '/api/lessons', access: teaches, body: () => lessonRequest(), okStatus: 201 },
-    { method: 'get', path: '/api/lessons/:lessonId', access: 'signed-in', ownership: owned('read'), okStatus: 200 },
-    { method: 'patch', path: '/api/lessons/:lessonId', access: 'signed-in', ownership: owned('owner'), body: () => ({ revealed: true }), okStatus: 200 },
-    { method: 'delete', path: '/api/lessons/:lessonId', access: 'signed-in', ownership: owned('owner'), okStatus: 204 },
-    { method: 'post', path: '/api/lessons/:lessonId/duplicate', access: 'signed-in', ownership: owned('owner'), body: () => ({}), okStatus: 201 },
-    { method: 'get', path: '/api/lessons/:lessonId/report', access: 'signed-in', ownership: owned('owner'), okStatus: 200 },
+    {
+      method: 'post',
+      path: '/api/lessons',
+      access: teaches,
+      body: () => lessonRequest(),
+      okStatus: 201,
+    },
+    {
+      method: 'get',
+      path: '/api/lessons/:lessonId',
+      access: 'signed-in',
+      ownership: owned('read'),
+      okStatus: 200,
+    },
+    {
+      method: 'patch',
+      path: '/api/lessons/:lessonId',
+      access: 'signed-in',
+      ownership: owned('owner'),
+      body: () => ({ revealed: true }),
+      okStatus: 200,
+    },
+    {
+      method: 'delete',
+      path: '/api/lessons/:lessonId',
+      access: 'signed-in',
+      ownership: owned('owner'),
+      okStatus: 204,
+    },
+    {
+      method: 'post',
+      path: '/api/lessons/:lessonId/duplicate',
+      access: 'signed-in',
+      ownership: owned('owner'),
+      body: () => ({}),
+      okStatus: 201,
+    },
+    {
+      method: 'get',
+      path: '/api/lessons/:lessonId/report',
+      access: 'signed-in',
+      ownership: owned('owner'),
+      okStatus: 200,
+    },
     {
       method: 'put',
       path: '/api/lessons/:assignedLessonId/answer',
@@ -78,6 +168,12 @@ export const classroomRoutes: RouteGroup = {
       body: () => ANSWER,
       okStatus: 200,
     },
-    { method: 'post', path: '/api/lessons/:assignedLessonId/run', access: 'signed-in', ownership: owned('write'), okStatus: 200 },
+    {
+      method: 'post',
+      path: '/api/lessons/:assignedLessonId/run',
+      access: 'signed-in',
+      ownership: owned('write'),
+      okStatus: 200,
+    },
   ],
 };
