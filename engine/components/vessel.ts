@@ -86,7 +86,7 @@ function switchVesselModes(c: VesselComponent, input: SwitchInput): boolean {
   const o = c.eventOffset;
   const t = ctx.timeS;
   const due = (k: number, g: number): boolean => g < 0 || (g <= 0 && fired[o + k] === 1);
-  let changed = spillAboveRim(c, input);
+  let changed = spillAboveRim(c, input, fired[o + BRIM_ENTER] === 1);
   const volume = state[c.index] as number;
   const net = ctx.netInflowM3PerS[c.index] as number;
   const level = ctx.levelM[c.index] as number;
@@ -108,14 +108,17 @@ function switchVesselModes(c: VesselComponent, input: SwitchInput): boolean {
   return switchObservations(c, input, level, due) || changed;
 }
 
-/** After an instant transfer a vessel may hold more than its rim volume: the surplus spills at once. */
-function spillAboveRim(c: VesselComponent, input: SwitchInput): boolean {
+/**
+ * After an instant transfer a vessel may hold more than its rim volume: the surplus spills at once.
+ * When the rim event itself fired, the surplus is only the event's location overshoot: not reported.
+ */
+function spillAboveRim(c: VesselComponent, input: SwitchInput, rimEventFired: boolean): boolean {
   const volume = input.state[c.index] as number;
   const surplus = volume - c.geometry.rimVolumeM3;
   if (!(surplus > 0)) return false;
   input.state[c.index] = c.geometry.rimVolumeM3;
   input.state[c.rimSinkIndex] = (input.state[c.rimSinkIndex] as number) + surplus;
-  if (!c.brimful && surplus > 1e-9 * c.geometry.rimVolumeM3) {
+  if (!c.brimful && !rimEventFired && surplus > 1e-9 * c.geometry.rimVolumeM3) {
     input.log({ t_s: input.ctx.timeS, kind: 'rim-overflow', where: c.vessel.id, detail: `${fmt(surplus * 1000)} L arriving at once spilled over the rim of ${c.vessel.id}.`, values: { lostM3: surplus } });
   }
   return true;

@@ -56,18 +56,39 @@ function bellState(bell: BellSiphonComponent, bed: VesselComponent, cycles: numb
 }
 
 /**
- * Cycle statistics of a plain standpipe bed: a cycle is a flood (spill-start to spill end)
- * followed by a drain through the weep hole. Period = time between successive spill-starts;
- * flood time = spill-start to spill end; drain time is not defined (null).
+ * Cycle statistics of a plain standpipe bed: a cycle is a flood (the level at the standpipe top,
+ * spilling) followed by a drain through the weep hole that takes the level below half the
+ * standpipe height; dips that end sooner belong to the same flood. Period = time between the starts
+ * of successive floods; flood time = time spent spilling in each completed cycle; drain time is
+ * not defined (null). `openLowM` is the lowest level since the last spill-start (the drain still
+ * under way when the run ends).
  */
-export function summariseStandpipeBed(standpipe: StandpipeComponent, events: readonly RunEvent[], marks: BedCycleMarks, endS: number, durationS: number): BedSummary {
+export function summariseStandpipeBed(standpipe: StandpipeComponent, events: readonly RunEvent[], marks: BedCycleMarks, openLowM: number, endS: number, durationS: number): BedSummary {
   const starts = timesOf(events, standpipe.bedId, 'spill-start');
   const ends = timesOf(events, standpipe.bedId, 'spill-end');
-  const floods = starts.flatMap((s) => {
-    const end = ends.find((e) => e >= s);
-    return end === undefined ? [] : [end - s];
+  const halfCrestM = 0.5 * standpipe.drain.standpipe.height;
+  const floodStarts: number[] = [];
+  const floods: number[] = [];
+  const highs: number[] = [];
+  const lows: number[] = [];
+  let spilling = 0;
+  let high = -Infinity;
+  starts.forEach((start, i) => {
+    if (floodStarts.length === 0) floodStarts.push(start);
+    const end = ends.find((e) => e >= start);
+    spilling += (end ?? endS) - start;
+    high = Math.max(high, marks.highsM[i] ?? -Infinity);
+    const low = i < marks.lowsM.length ? marks.lowsM[i] : i === starts.length - 1 ? openLowM : undefined;
+    if (low === undefined || low >= halfCrestM) return;
+    floods.push(spilling);
+    highs.push(high);
+    lows.push(low);
+    spilling = 0;
+    high = -Infinity;
+    const next = starts[i + 1];
+    if (next !== undefined) floodStarts.push(next);
   });
-  const period = statistics(differences(starts));
+  const period = statistics(differences(floodStarts));
   const flooded = standpipe.floodedTimeS + (standpipe.phase === 'spilling' ? endS - standpipe.phaseStartS : 0);
   const cycles = floods.length;
   return {
@@ -78,9 +99,9 @@ export function summariseStandpipeBed(standpipe: StandpipeComponent, events: rea
     periodMax_s: period.max,
     floodMean_s: statistics(floods).mean,
     drainMean_s: null,
-    highLevel_m: statistics(marks.highsM).mean,
-    lowLevel_m: statistics(marks.lowsM).mean,
+    highLevel_m: statistics(highs).mean,
+    lowLevel_m: statistics(lows).mean,
     fractionFlooded: durationS > 0 ? flooded / durationS : 0,
-    state: cycles >= 2 ? 'cycling' : standpipe.phase === 'spilling' || cycles === 1 ? 'flooded' : 'idle',
+    state: cycles >= 2 ? 'cycling' : standpipe.phase === 'spilling' || starts.length > 0 ? 'flooded' : 'idle',
   };
 }

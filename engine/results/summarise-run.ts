@@ -50,7 +50,8 @@ function summariseBeds(record: RunRecord, durationS: number): BedSummary[] {
     if (bed) byId.set(bell.bedId, summariseBellBed(bell, bed, model.events, cycleMarks.get(bell.bedId) ?? emptyMarks, endS, durationS));
   }
   for (const standpipe of standpipes) {
-    byId.set(standpipe.bedId, summariseStandpipeBed(standpipe, model.events, cycleMarks.get(standpipe.bedId) ?? emptyMarks, endS, durationS));
+    const openLowM = record.extremes[standpipe.wiring.bed.index]?.windowMinM ?? Infinity;
+    byId.set(standpipe.bedId, summariseStandpipeBed(standpipe, model.events, cycleMarks.get(standpipe.bedId) ?? emptyMarks, openLowM, endS, durationS));
   }
   return model.parts.scenario.vessels.flatMap((v) => byId.get(v.id) ?? []);
 }
