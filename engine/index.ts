@@ -16,3 +16,12 @@ export type {
   Verdict,
   VesselSummary,
 } from './results/run-result';
+export {
+  primingFlowM3PerS,
+  rimSpillFlowM3PerS,
+  siphonFullBoreFlowM3PerS,
+  spillNumber,
+  STANDARD_GRAVITY_M_PER_S2,
+  torricelliOutflowM3PerS,
+  weirFlowM3PerS,
+} from './hydraulics/index';
