@@ -3,6 +3,7 @@ import { torricelliOutflowM3PerS } from '../hydraulics/torricelli-outflow';
 import { formatSignificant as fmt } from '../results/format-significant';
 import type { ModelComponent, ModelContext, SwitchInput } from '../system/model-context';
 import { bellSpillFlowM3PerS, rimControlHeadM } from './bell-spill-flow';
+import { orificeDryEventValue } from './orifice-run-dry';
 import { makeSiphonFlowFunction } from './siphon-flow-table';
 import type { VesselComponent } from './vessel';
 
@@ -41,11 +42,14 @@ export interface StandpipeComponent extends ModelComponent {
   /** Head over the rim where the bore takes over from the rim weir, m; and which side the level is on. */
   readonly rimControlHeadM: number;
   boreControls: boolean;
+  /** The bed has drained to its weep hole (run dry, see ORIFICE_DRY_HEAD_M). */
+  weepDry: boolean;
 }
 
 const SPILL_START = 0;
 const SPILL_END = 1;
 const RIM_CONTROL = 2;
+const WEEP_DRY = 3;
 
 /** Creates the standpipe drain of `bed`. */
 export function makeStandpipeDrain(bed: BedVessel & { drain: StandpipeDrain }, wiring: StandpipeWiring): StandpipeComponent {
@@ -59,7 +63,8 @@ export function makeStandpipeDrain(bed: BedVessel & { drain: StandpipeDrain }, w
     fullBoreFlowM3PerS: makeSiphonFlowFunction(bed.drain, wiring.friction, wiring.kinematicViscosityM2PerS, wiring.lossCoefficients, bed.floorElevation + bed.height - bed.drain.outletElevation, wiring.exactHydraulics),
     rimControlHeadM: rimControlHeadM(bed.drain.standpipe),
     boreControls: false,
-    eventCount: 3,
+    weepDry: bed.initialLevel <= 0,
+    eventCount: 4,
     eventOffset: 0,
     computeFlows: (ctx) => writeStandpipeFlows(c, ctx),
     eventValues: (ctx, out) => {
@@ -69,6 +74,7 @@ export function makeStandpipeDrain(bed: BedVessel & { drain: StandpipeDrain }, w
       out[c.eventOffset + SPILL_END] = c.phase === 'spilling' ? level - crest : 1;
       const overRim = level - crest - c.rimControlHeadM;
       out[c.eventOffset + RIM_CONTROL] = c.phase !== 'spilling' ? 1 : c.boreControls ? overRim : -overRim;
+      out[c.eventOffset + WEEP_DRY] = c.drain.weepHole === undefined ? 1 : orificeDryEventValue(c.weepDry, level);
     },
     switchModes: (input) => switchStandpipePhase(c, input),
   };
@@ -90,7 +96,7 @@ function writeStandpipeFlows(c: StandpipeComponent, ctx: ModelContext): void {
   const weep = c.drain.weepHole;
   if (weep !== undefined && weepChannel >= 0) {
     const areaM2 = (Math.PI / 4) * weep.diameter ** 2;
-    ctx.flowM3PerS[weepChannel] = torricelliOutflowM3PerS(weep.dischargeCoefficient, areaM2, level) * open;
+    ctx.flowM3PerS[weepChannel] = c.weepDry ? 0 : torricelliOutflowM3PerS(weep.dischargeCoefficient, areaM2, level) * open;
   }
 }
 
@@ -117,6 +123,10 @@ function switchStandpipePhase(c: StandpipeComponent, input: SwitchInput): boolea
   const overRim = level - crest - c.rimControlHeadM;
   if (c.phase === 'spilling' && due(RIM_CONTROL, c.boreControls ? overRim : -overRim)) {
     c.boreControls = !c.boreControls;
+    return true;
+  }
+  if (c.drain.weepHole !== undefined && due(WEEP_DRY, orificeDryEventValue(c.weepDry, level))) {
+    c.weepDry = !c.weepDry;
     return true;
   }
   return false;
