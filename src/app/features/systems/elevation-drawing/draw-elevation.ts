@@ -9,28 +9,47 @@ export const ELEVATION_WIDTH = 960;
 /** The tallest the drawing may be, SVG user units. */
 export const ELEVATION_MAX_HEIGHT = 440;
 
-/** How metres map onto the drawing: one scale for both axes, so the drawing is to scale. */
+/**
+ * How metres map onto the drawing: `pxPerM` across, `pzPerM` up. They are equal (the drawing is
+ * to scale) unless a vertical exaggeration was asked for.
+ */
 export interface ElevationFrame {
   readonly pxPerM: number;
+  readonly pzPerM: number;
   readonly height: number;
   readonly px: (xM: number) => number;
   readonly py: (zM: number) => number;
 }
 
-/** The largest single scale that fits the layout into the width and the maximum height. */
-export function elevationFrame(layout: ElevationLayout): ElevationFrame {
+/** Choices for {@link elevationFrame}. */
+export interface ElevationFrameOptions {
+  /** Vertical scale over horizontal scale (1: true to scale). */
+  readonly verticalExaggeration?: number;
+  /** The tallest the drawing may be, SVG user units. */
+  readonly maxHeight?: number;
+}
+
+/** The largest scale that fits the layout into the width and the maximum height. */
+export function elevationFrame(
+  layout: ElevationLayout,
+  options: ElevationFrameOptions = {},
+): ElevationFrame {
   const { top, right, bottom, left } = ELEVATION_MARGIN;
+  const exaggeration = options.verticalExaggeration ?? 1;
+  const maxHeight = options.maxHeight ?? ELEVATION_MAX_HEIGHT;
   const spanX = Math.max(layout.xMax - layout.xMin, 0.1);
   const spanZ = Math.max(layout.zMax - layout.zMin, 0.1);
   const pxPerM = Math.min(
     (ELEVATION_WIDTH - left - right) / spanX,
-    (ELEVATION_MAX_HEIGHT - top - bottom) / spanZ,
+    (maxHeight - top - bottom) / (spanZ * exaggeration),
   );
+  const pzPerM = pxPerM * exaggeration;
   return {
     pxPerM,
-    height: top + bottom + spanZ * pxPerM,
+    pzPerM,
+    height: top + bottom + spanZ * pzPerM,
     px: (xM) => left + (xM - layout.xMin) * pxPerM,
-    py: (zM) => top + (layout.zMax - zM) * pxPerM,
+    py: (zM) => top + (layout.zMax - zM) * pzPerM,
   };
 }
 
@@ -123,7 +142,7 @@ function drawBoxes(
     .attr('x', (b) => frame.px(b.x))
     .attr('y', (b) => frame.py(b.z + b.height))
     .attr('width', (b) => b.width * frame.pxPerM)
-    .attr('height', (b) => b.height * frame.pxPerM)
+    .attr('height', (b) => b.height * frame.pzPerM)
     .attr('fill', (b) => BOX_STYLE[b.kind].fill)
     .attr('fill-opacity', (b) => BOX_STYLE[b.kind].fillOpacity)
     .attr('stroke', (b) => BOX_STYLE[b.kind].stroke)
