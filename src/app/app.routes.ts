@@ -38,6 +38,13 @@ export const routes: Routes = [
     title: 'Choose a new password · Tidewright',
   },
   {
+    // Before `systems` so that this longer path wins.
+    path: 'systems/:systemId/measurements',
+    canMatch: [roleGuard()],
+    loadChildren: () =>
+      import('./features/measurements/measurements.routes').then((m) => m.measurementsRoutes),
+  },
+  {
     path: 'systems',
     canMatch: [roleGuard()],
     loadChildren: () => import('./features/systems/systems.routes').then((m) => m.systemsRoutes),
