@@ -76,9 +76,8 @@ export class JoinPage {
     const preview = this.preview();
     return preview ? `${preview.instructorName} invited ${preview.email}` : '';
   });
-  protected readonly password = new FormControl('', {
-    nonNullable: true,
-    validators: [Validators.required],
+  protected readonly signInForm = new FormGroup({
+    password: new FormControl('', { nonNullable: true, validators: [Validators.required] }),
   });
   protected readonly registration = new FormGroup({
     name: new FormControl('', {
@@ -102,9 +101,9 @@ export class JoinPage {
 
   protected async signInAndJoin(): Promise<void> {
     const preview = this.preview();
-    if (!preview || this.password.invalid) return this.password.markAsTouched();
+    if (!preview || this.signInForm.invalid) return this.signInForm.markAllAsTouched();
     await this.attempt(async () => {
-      const result = await this.auth.signIn(preview.email, this.password.value);
+      const result = await this.auth.signIn(preview.email, this.signInForm.controls.password.value);
       if (result.status === 'rejected') this.problem.set(result.message);
       else await this.accept();
     });

@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
-import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
+import { FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCardModule } from '@angular/material/card';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -47,9 +47,11 @@ export class ClassList {
     this.items().filter((c) => c.myRole === 'instructor'),
   );
   protected readonly attending = computed(() => this.items().filter((c) => c.myRole === 'student'));
-  protected readonly newName = new FormControl('', {
-    nonNullable: true,
-    validators: [Validators.required, Validators.maxLength(200)],
+  protected readonly newClass = new FormGroup({
+    name: new FormControl('', {
+      nonNullable: true,
+      validators: [Validators.required, Validators.maxLength(200)],
+    }),
   });
 
   constructor() {
@@ -57,9 +59,9 @@ export class ClassList {
   }
 
   protected async createClass(): Promise<void> {
-    const name = this.newName.value.trim();
+    const name = this.newClass.controls.name.value.trim();
     if (!name) {
-      this.newName.markAsTouched();
+      this.newClass.markAllAsTouched();
       return;
     }
     try {

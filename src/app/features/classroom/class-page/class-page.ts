@@ -7,7 +7,7 @@ import {
   input,
   signal,
 } from '@angular/core';
-import { FormControl, ReactiveFormsModule } from '@angular/forms';
+import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatChipsModule } from '@angular/material/chips';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -65,7 +65,7 @@ export class ClassPage {
   protected readonly library = signal<readonly LessonListItem[]>([]);
   protected readonly problem = signal<string | null>(null);
   protected readonly isInstructor = computed(() => this.detail()?.myRole === 'instructor');
-  protected readonly fromLibrary = new FormControl<string | null>(null);
+  protected readonly addForm = new FormGroup({ lessonId: new FormControl<string | null>(null) });
   protected readonly progressWords = PROGRESS_WORDS;
 
   constructor() {
@@ -77,10 +77,10 @@ export class ClassPage {
   }
 
   protected async addFromLibrary(): Promise<void> {
-    const lessonId = this.fromLibrary.value;
+    const lessonId = this.addForm.controls.lessonId.value;
     if (!lessonId) return;
     await this.act(() => this.api.duplicateLesson(lessonId, { classId: this.classId() }));
-    this.fromLibrary.setValue(null);
+    this.addForm.reset();
   }
 
   protected async reload(): Promise<void> {

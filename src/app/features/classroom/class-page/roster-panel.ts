@@ -8,7 +8,7 @@ import {
   signal,
   effect,
 } from '@angular/core';
-import { FormControl, ReactiveFormsModule } from '@angular/forms';
+import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -51,14 +51,16 @@ export class RosterPanel {
   protected readonly notice = signal<string | null>(null);
   protected readonly problem = signal<string | null>(null);
   protected readonly sending = signal(false);
-  protected readonly addresses = new FormControl('', { nonNullable: true });
+  protected readonly inviteForm = new FormGroup({
+    addresses: new FormControl('', { nonNullable: true }),
+  });
 
   constructor() {
     effect(() => void this.load(this.classId()));
   }
 
   protected async invite(): Promise<void> {
-    const emails = splitAddresses(this.addresses.value);
+    const emails = splitAddresses(this.inviteForm.controls.addresses.value);
     this.notice.set(null);
     this.problem.set(null);
     if (emails.length === 0) {
@@ -77,7 +79,7 @@ export class RosterPanel {
           ? ` Already in the class: ${result.alreadyMembers.join(', ')}.`
           : '';
       this.notice.set((sent + skipped).trim());
-      this.addresses.setValue('');
+      this.inviteForm.reset();
       await this.load(this.classId());
     } catch (error: unknown) {
       this.problem.set(problemMessage(error));
