@@ -1,0 +1,172 @@
+import { provideHttpClient } from '@angular/common/http';
+import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
+import { TestBed } from '@angular/core/testing';
+import { provideRouter } from '@angular/router';
+import type { System } from '../../../../../shared/contracts/systems';
+import type {
+  SimulationReply,
+  SimulationRequest,
+} from '../../../core/simulation/simulation-messages';
+import {
+  SIMULATION_WORKER_FACTORY,
+  type SimulationWorker,
+} from '../../../core/simulation/simulation-runner';
+import { EXAMPLE_TWO_BED_SCENARIO } from '../example-two-bed-scenario';
+import { SystemEditor } from './system-editor';
+
+const ID = '44444444-4444-4444-8444-444444444444';
+
+/** Records what the editor asks the simulation worker and answers each with an empty result. */
+class RecordingWorker implements SimulationWorker {
+  static readonly requests: SimulationRequest[] = [];
+  onmessage: ((event: MessageEvent<SimulationReply>) => void) | null = null;
+  onerror: ((event: ErrorEvent) => void) | null = null;
+  postMessage(request: SimulationRequest): void {
+    RecordingWorker.requests.push(request);
+    const reply: SimulationReply = {
+      kind: 'done',
+      requestId: request.requestId,
+      status: 'completed',
+      reason: null,
+      stoppedByBudget: false,
+      reachedS: request.durationS,
+      wallMs: 1,
+      result: {
+        summary: { beds: [], vessels: [], pumps: [] },
+        events: [],
+        verdicts: [],
+        massBalanceError: 0,
+        stats: {
+          steps: 0,
+          rejected: 0,
+          rhsEvaluations: 0,
+          events: 0,
+          wall_ms: 1,
+          simulated_s: request.durationS,
+        },
+        series: { t_s: [], channels: [] },
+      },
+    };
+    setTimeout(() => this.onmessage?.(new MessageEvent('message', { data: reply })));
+  }
+  terminate(): void {}
+}
+
+function system(version: number): System {
+  return {
+    id: ID,
+    name: 'Two beds',
+    version,
+    scenario: structuredClone(EXAMPLE_TWO_BED_SCENARIO) as unknown as Record<string, unknown>,
+    ownerId: ID,
+    ownerName: 'Dana Demo',
+    access: 'owner',
+    lastVerdict: null,
+    calibration: null,
+    createdAt: '2026-01-01T00:00:00.000Z',
+    updatedAt: '2026-01-01T00:00:00.000Z',
+  };
+}
+
+const pause = (ms: number) => new Promise((resolve) => setTimeout(resolve, ms));
+
+async function render() {
+  RecordingWorker.requests.length = 0;
+  TestBed.configureTestingModule({
+    providers: [
+      provideRouter([]),
+      provideHttpClient(),
+      provideHttpClientTesting(),
+      { provide: SIMULATION_WORKER_FACTORY, useValue: () => new RecordingWorker() },
+    ],
+  });
+  const fixture = TestBed.createComponent(SystemEditor);
+  fixture.componentRef.setInput('id', ID);
+  const http = TestBed.inject(HttpTestingController);
+  await fixture.whenStable();
+  http.expectOne(`/api/systems/${ID}`).flush(system(3));
+  await pause(0);
+  await fixture.whenStable();
+  return { fixture, http, root: fixture.nativeElement as HTMLElement };
+}
+
+async function openBedsAndType(
+  fixture: { whenStable(): Promise<unknown> },
+  root: HTMLElement,
+  text: string,
+) {
+  const bedsTab = [...root.querySelectorAll<HTMLElement>('[role=tab]')].find((tab) =>
+    tab.textContent?.includes('Beds'),
+  );
+  bedsTab?.click();
+  await fixture.whenStable();
+  const field = [...root.querySelectorAll('tw-quantity-input')].find((q) =>
+    q.textContent?.includes('Standpipe height'),
+  );
+  const input = field?.querySelector('input');
+  if (!input) throw new Error('No standpipe height field on the Beds tab.');
+  input.value = text;
+  input.dispatchEvent(new Event('input'));
+  await pause(200);
+  await fixture.whenStable();
+}
+
+describe('SystemEditor', () => {
+  it('starts a short live check of the loaded system in the worker', async () => {
+    await render();
+    const first = RecordingWorker.requests[0];
+    expect(first?.durationS).toBe(3600);
+    expect(first?.budgetMs).toBeGreaterThan(0);
+    expect(first?.scenario.vessels.map((v) => v.id)).toEqual(['tank', 'bed-a', 'bed-b']);
+  });
+
+  it('redraws the standpipe and asks for a new live check when its height is typed', async () => {
+    const { fixture, root } = await render();
+    const drawn = () =>
+      Number(root.querySelector('rect.standpipe[data-id="bed-a"]')?.getAttribute('height'));
+    const before = drawn();
+    await openBedsAndType(fixture, root, '0.2');
+    expect(drawn()).toBeCloseTo((before * 0.2) / 0.25, 6);
+    const latest = RecordingWorker.requests.at(-1)?.scenario.vessels[1];
+    expect(latest?.kind === 'bed' ? latest.drain.standpipe.height : null).toBe(0.2);
+  });
+
+  it('names the problem under the field and stops live checks when the standpipe is taller than the bed', async () => {
+    const { fixture, root } = await render();
+    const asked = RecordingWorker.requests.length;
+    await openBedsAndType(fixture, root, '0.5');
+    const field = [...root.querySelectorAll('tw-quantity-input')].find((q) =>
+      q.textContent?.includes('Standpipe height'),
+    );
+    expect(field?.querySelector('mat-error')?.textContent).toMatch(/standpipe/i);
+    expect(root.querySelector('.issues')?.textContent).toContain(
+      'vessels[1].drain.standpipe.height',
+    );
+    expect(RecordingWorker.requests.length).toBe(asked);
+  });
+
+  it('saves with the loaded version and offers to reload when someone saved first', async () => {
+    const { fixture, http, root } = await render();
+    await openBedsAndType(fixture, root, '0.2');
+    const save = [...root.querySelectorAll<HTMLButtonElement>('button')].find((b) =>
+      b.textContent?.trim().endsWith('Save'),
+    );
+    save?.click();
+    const put = http.expectOne({ method: 'PUT', url: `/api/systems/${ID}` });
+    const body = put.request.body as {
+      version: number;
+      scenario: { vessels: { drain?: { standpipe: { height: number } } }[] };
+    };
+    expect(body.version).toBe(3);
+    expect(body.scenario.vessels[1]?.drain?.standpipe.height).toBe(0.2);
+    put.flush(
+      { error: { code: 'STALE_VERSION', message: 'Stale.' } },
+      { status: 409, statusText: 'Conflict' },
+    );
+    await pause(0);
+    await fixture.whenStable();
+    expect(root.querySelector('.banner')?.textContent).toContain(
+      'Someone saved this system after you opened it',
+    );
+  });
+});
