@@ -40,7 +40,7 @@ export function differenceText(row: ComparisonRow, system: UnitSystem): string {
 
 /** A coefficient with its standard error, e.g. "0.552 ± 0.008". */
 export function coefficientText(value: number, standardError: number | null): string {
-  const digits = standardError && standardError > 0 ? Math.max(0, Math.min(4, 1 - Math.floor(Math.log10(standardError)))) : 3;
+  const digits = standardError && standardError > 0 ? Math.max(0, Math.min(6, -Math.floor(Math.log10(standardError)))) : 3;
   const main = value.toFixed(digits);
   return standardError === null ? main : `${main} ± ${standardError.toFixed(digits)}`;
 }
