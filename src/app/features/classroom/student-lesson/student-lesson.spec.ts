@@ -1,7 +1,11 @@
 import { provideHttpClient } from '@angular/common/http';
 import { HttpTestingController, provideHttpClientTesting } from '@angular/common/http/testing';
 import { TestBed } from '@angular/core/testing';
-import { QuestionListSchema, type Lesson, type MyAnswer } from '../../../../../shared/contracts/classroom';
+import {
+  QuestionListSchema,
+  type Lesson,
+  type MyAnswer,
+} from '../../../../../shared/contracts/classroom';
 import { EXAMPLE_SCENARIO_FILE } from '../../../../../shared/scenario';
 import { StudentLesson } from './student-lesson';
 
@@ -35,7 +39,12 @@ async function render(lesson: Lesson) {
   const answered: MyAnswer[] = [];
   fixture.componentInstance.answered.subscribe((a) => answered.push(a));
   await fixture.whenStable();
-  return { fixture, root: fixture.nativeElement as HTMLElement, http: TestBed.inject(HttpTestingController), answered };
+  return {
+    fixture,
+    root: fixture.nativeElement as HTMLElement,
+    http: TestBed.inject(HttpTestingController),
+    answered,
+  };
 }
 
 function button(root: HTMLElement, text: string): HTMLButtonElement {
@@ -50,7 +59,9 @@ describe('StudentLesson', () => {
     expect(button(root, 'Run the system').disabled).toBe(true);
     expect(root.querySelector('tw-elevation-drawing svg')).not.toBeNull();
 
-    const stall = [...root.querySelectorAll('mat-radio-button')].find((r) => r.textContent?.includes('Stalls'));
+    const stall = [...root.querySelectorAll('mat-radio-button')].find((r) =>
+      r.textContent?.includes('Stalls'),
+    );
     stall?.querySelector<HTMLInputElement>('input')?.click();
     const level = root.querySelector<HTMLInputElement>('input[inputmode="decimal"]');
     if (!level) throw new Error('No number field.');
@@ -67,17 +78,24 @@ describe('StudentLesson', () => {
         { questionId: 'low', value: 0.44 },
       ],
     });
-    const saved: MyAnswer = { predictions: request.request.body.predictions, submittedAt: '2030-01-01T00:00:01.000Z', ranAt: null, simulation: null, outcomes: null };
+    const saved: MyAnswer = {
+      predictions: request.request.body.predictions,
+      submittedAt: '2030-01-01T00:00:01.000Z',
+      ranAt: null,
+      simulation: null,
+      outcomes: null,
+    };
     request.flush(saved);
-    await fixture.whenStable();
-    expect(answered).toEqual([saved]);
+    await vi.waitFor(() => expect(answered).toEqual([saved]));
   });
 
   it('names the first unanswered question instead of saving', async () => {
     const { fixture, root, http } = await render(LESSON);
     button(root, 'Save predictions').click();
     await fixture.whenStable();
-    expect(root.querySelector('[role="alert"]')?.textContent).toContain('Answer question 1 before saving.');
+    expect(root.querySelector('[role="alert"]')?.textContent).toContain(
+      'Answer question 1 before saving.',
+    );
     http.expectNone(`/api/lessons/${LESSON.id}/answer`);
   });
 
@@ -89,19 +107,41 @@ describe('StudentLesson', () => {
       ],
       submittedAt: '2030-01-01T00:00:01.000Z',
       ranAt: '2030-01-01T00:00:02.000Z',
-      simulation: { status: 'completed', error: null, durationS: 3600, verdict: 'fails', verdicts: [], beds: [], vessels: [], levels: { t_s: [0, 5], channels: [{ where: 'tank', values: [0.5, 0.49] }] } },
+      simulation: {
+        status: 'completed',
+        error: null,
+        durationS: 3600,
+        verdict: 'fails',
+        verdicts: [],
+        beds: [],
+        vessels: [],
+        levels: { t_s: [0, 5], channels: [{ where: 'tank', values: [0.5, 0.49] }] },
+      },
       outcomes: [
-        { questionId: 'regime', predicted: 'spill-stall', simulated: 'cycling', correct: false, difference: null },
+        {
+          questionId: 'regime',
+          predicted: 'spill-stall',
+          simulated: 'cycling',
+          correct: false,
+          difference: null,
+        },
         { questionId: 'low', predicted: 0.44, simulated: 0.45, correct: true, difference: -0.01 },
       ],
     };
     const { root } = await render({ ...LESSON, myAnswer: ran });
-    const rows = [...root.querySelectorAll('table.outcomes tbody tr')].map((tr) => [...tr.querySelectorAll('td')].slice(1, 3).map((td) => td.textContent?.trim()));
+    const rows = [...root.querySelectorAll('table.outcomes tbody tr')].map((tr) =>
+      [...tr.querySelectorAll('td')].slice(1, 3).map((td) => td.textContent?.trim()),
+    );
     expect(rows).toEqual([
-      ['Stalls: trickles over the standpipe, never starts', 'Cycles: floods, siphons, drains, again'],
+      [
+        'Stalls: trickles over the standpipe, never starts',
+        'Cycles: floods, siphons, drains, again',
+      ],
       ['44.0 cm', '45.0 cm'],
     ]);
-    expect(root.querySelector('.score')?.textContent?.replace(/\s+/g, ' ').trim()).toBe('1 of 2 predictions right.');
+    expect(root.querySelector('.score')?.textContent?.replace(/\s+/g, ' ').trim()).toBe(
+      '1 of 2 predictions right.',
+    );
     expect(root.querySelector('button.run-button')).toBeNull();
   });
 });
