@@ -49,7 +49,7 @@ export class LiveVerdict {
   /** Asks for the whole duration to be simulated in the browser. */
   readonly runWhole = output<void>();
   /** Asks to stop that whole-duration run. */
-  readonly cancel = output<void>();
+  readonly cancelWhole = output<void>();
 
   protected readonly headline = computed(() => {
     const verdicts = this.answer()?.result.verdicts ?? [];
