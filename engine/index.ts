@@ -25,3 +25,18 @@ export {
   torricelliOutflowM3PerS,
   weirFlowM3PerS,
 } from './hydraulics/index';
+export {
+  bedRegime,
+  cyclingInflowWindow,
+  cyclingInflowWindows,
+  pumpDutyPoint,
+  pumpDutyPoints,
+  pumpedInflowsM3PerS,
+  regimeAtInflow,
+  type BedRegime,
+  type InflowRegime,
+  type InflowWindow,
+  type InflowWindowOptions,
+  type PumpDutyPoint,
+  type RegimeEvidence,
+} from './analysis/index';
