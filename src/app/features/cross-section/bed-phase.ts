@@ -1,4 +1,5 @@
 import type { CrossSectionEvent } from './cross-section-data';
+import { lastAtOrBefore } from './last-at-or-before';
 import type { SeriesReader } from './series-reader';
 
 /** The phase of one bed as the drawing names it. */
@@ -33,21 +34,6 @@ const CODE_AFTER_EVENT: Readonly<Record<string, number>> = {
   primed: 3,
   'siphon-break': 0,
 };
-
-/** The last index in ascending `times` at or before `timeS`, or -1. */
-function lastAtOrBefore(times: readonly number[], timeS: number): number {
-  let low = 0;
-  let high = times.length - 1;
-  let found = -1;
-  while (low <= high) {
-    const middle = (low + high) >> 1;
-    if ((times[middle] as number) <= timeS) {
-      found = middle;
-      low = middle + 1;
-    } else high = middle - 1;
-  }
-  return found;
-}
 
 /**
  * One bed's phase over a run. The phase channel (`phase:<bed>`) is the base, held from the last
@@ -94,7 +80,8 @@ export class BedPhaseTrack {
     if (Number.isNaN(code)) code = 0;
     const primed = lastAtOrBefore(this.primedTimes, timeS);
     const sincePrimed = primed < 0 ? Infinity : timeS - (this.primedTimes[primed] as number);
-    if (code === 3 && sincePrimed < PRIMING_SHOWN_S) return { phase: 'priming', sinceS: sincePrimed };
+    if (code === 3 && sincePrimed < PRIMING_SHOWN_S)
+      return { phase: 'priming', sinceS: sincePrimed };
     const broke = lastAtOrBefore(this.breakTimes, timeS);
     const sinceBreak = broke < 0 ? Infinity : timeS - (this.breakTimes[broke] as number);
     if (code === 0 && sinceBreak < BREAK_SHOWN_S) return { phase: 'break', sinceS: sinceBreak };

@@ -1,4 +1,5 @@
 import type { CrossSectionEvent } from './cross-section-data';
+import { lastAtOrBefore } from './last-at-or-before';
 
 /** What a pump is doing: delivering, stopped, or wanting to run with its intake out of water. */
 export type PumpState = 'on' | 'off' | 'dry';
@@ -33,16 +34,7 @@ export class PumpStateTrack {
 
   /** The state at `timeS`: the last switch at or before it, else the initial state. */
   stateAt(timeS: number): PumpState {
-    let low = 0;
-    let high = this.times.length - 1;
-    let found = -1;
-    while (low <= high) {
-      const middle = (low + high) >> 1;
-      if ((this.times[middle] as number) <= timeS) {
-        found = middle;
-        low = middle + 1;
-      } else high = middle - 1;
-    }
+    const found = lastAtOrBefore(this.times, timeS);
     return found < 0 ? this.initial : (this.states[found] as PumpState);
   }
 }
