@@ -54,15 +54,15 @@ export function toSystem(row: SystemRow, access: SystemAccessLevel, ownerName: s
 /**
  * Checks a scenario document with the shared schema; a failure is a 400 listing every issue with
  * its field path, under `prefix` (e.g. "scenario") when the document is nested in the body.
- * Returns the document with its `name` set to `name`.
+ * With `name`, the document's `name` is set to it first; the checked document is returned.
  */
-export function checkScenarioDocument(document: unknown, name: string, prefix: string): Record<string, unknown> {
+export function checkScenarioDocument(document: unknown, name: string | undefined, prefix: string): Record<string, unknown> {
   if (typeof document !== 'object' || document === null || Array.isArray(document)) {
     throw badRequest('The scenario must be a JSON object in the scenario/1 format.', [
       { path: prefix || '(body)', message: 'Expected a JSON object.' },
     ]);
   }
-  const named = { ...asDocument(document), name };
+  const named = name === undefined ? asDocument(document) : { ...asDocument(document), name };
   const parsed = parseScenario(named);
   if (parsed.success) return named;
   const fields = parsed.issues.map((issue) => ({
@@ -118,11 +118,15 @@ export async function createSystem(db: Database, user: User, request: CreateSyst
   return createSystemFromDocument(db, user, request.name, request.scenario, 'scenario');
 }
 
-/** `POST /api/systems/import`: the body is a scenario file; the system takes its name unless given one. */
+/**
+ * `POST /api/systems/import`: the body is a scenario file, checked as it is (errors name paths in
+ * the file); the system takes the file's name unless `name` is given.
+ */
 export async function importSystem(db: Database, user: User, file: unknown, name?: string): Promise<System> {
-  const fileName = asDocument(file)['name'];
-  const chosen = name ?? (typeof fileName === 'string' && fileName.trim() ? fileName.trim().slice(0, 200) : 'Imported system');
-  return createSystemFromDocument(db, user, chosen, file, '');
+  const checked = checkScenarioDocument(file, undefined, '');
+  const fileName = checked['name'];
+  const chosen = name ?? (typeof fileName === 'string' ? fileName.trim().slice(0, 200) : '');
+  return createSystemFromDocument(db, user, chosen || 'Imported system', checked, '');
 }
 
 /** `PUT /api/systems/:id`: saves if `request.version` is current, else 409 `STALE_VERSION`. */

@@ -67,7 +67,8 @@ describe('runs across users and limits', () => {
   });
 
   it('fails a run that passes the wall-time limit, saying what to do, and keeps its partial result', async () => {
-    w = await createRunsWorld({ timeLimitMs: 300, graceMs: 5_000 });
+    // A long grace, so the engine's own stop (with its partial result) always comes before a hard kill.
+    w = await createRunsWorld({ timeLimitMs: 300, graceMs: 60_000 });
     const system = await createSystem(w.owner);
     const run = await runSystem(w.owner, system.id, { duration: '24 h' });
     expect(run.status).toBe('failed');
