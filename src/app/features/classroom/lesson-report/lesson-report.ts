@@ -76,6 +76,7 @@ export class LessonReport {
         const outcome = answer.outcomes.find((o) => o.questionId === question.id);
         return {
           id: question.id,
+          numeric: question.kind !== 'bed-regime',
           words: answerWords(question, outcome?.predicted ?? null, this.system()),
           correct: outcome?.correct ?? null,
         };

@@ -27,7 +27,7 @@ const MARGIN = { top: 16, right: 24, bottom: 36, left: 24 };
 const RADIUS = 6;
 const STEP = RADIUS * 2 + 2;
 const ROW_HEIGHT = 30;
-const CHOICE_LABEL_WIDTH = 250;
+const CHOICE_LABEL_WIDTH = 340;
 
 /** Draws the dot plot into `svg` (replacing what was there) and sets its viewBox. */
 export function drawPredictionPlot(svg: SVGSVGElement, data: PredictionPlotData): void {

@@ -89,6 +89,7 @@ export class StudentLesson {
       return {
         number: index + 1,
         prompt: question.prompt,
+        numeric: question.kind !== 'bed-regime',
         predicted: answerWords(question, outcome?.predicted ?? null, this.system()),
         simulated: answerWords(question, outcome?.simulated ?? null, this.system()),
         correct: outcome?.correct ?? null,
