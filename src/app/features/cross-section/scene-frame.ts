@@ -1,7 +1,4 @@
-import {
-  type ElevationFrame,
-  elevationFrame,
-} from '../systems/elevation-drawing/draw-elevation';
+import { type ElevationFrame, elevationFrame } from '../systems/elevation-drawing/draw-elevation';
 import type { CrossSectionScene } from './cross-section-scene';
 
 /** The tallest the cross-section may be, SVG user units (taller than the editor's sketch). */

@@ -25,6 +25,8 @@ export interface SceneState {
  */
 export class SceneSampler {
   readonly reader: SeriesReader;
+  /** The largest flow along any pipe over the run, m³/s (sets how busy the flow marks look). */
+  readonly busiestM3PerS: number;
   private readonly bedTracks: BedPhaseTrack[];
   private readonly pumpTracks: PumpStateTrack[];
   private readonly state: {
@@ -44,6 +46,7 @@ export class SceneSampler {
     this.reader = new SeriesReader(series);
     this.bedTracks = scene.beds.map((bed) => new BedPhaseTrack(bed.id, this.reader, events));
     this.pumpTracks = scene.pumps.map((p) => new PumpStateTrack(p.id, p.initialState, events));
+    this.busiestM3PerS = Math.max(0, ...scene.pipes.map((p) => this.reader.largest(p.channelId)));
     this.state = {
       timeS: 0,
       levelsM: new Float64Array(scene.vessels.length),
@@ -52,11 +55,6 @@ export class SceneSampler {
       flowsM3PerS: new Float64Array(scene.pipes.length),
       pumps: scene.pumps.map((p) => p.initialState),
     };
-  }
-
-  /** The largest flow along any pipe over the run, m³/s (sets how busy the flow marks look). */
-  largestPipeFlowM3PerS(): number {
-    return Math.max(0, ...this.scene.pipes.map((p) => this.reader.largest(p.channelId)));
   }
 
   /** The state at `timeS`. */

@@ -1,5 +1,5 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, inject, input, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, type OnInit, inject, input, output, signal } from '@angular/core';
 import { FormArray, FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
@@ -36,7 +36,7 @@ const READING = /^\s*(\d+(:\d{1,2}){0,2}(\.\d+)?|\d+(\.\d+)?\s*[a-z]+)\s*$/i;
   styleUrl: './stopwatch-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class StopwatchForm {
+export class StopwatchForm implements OnInit {
   /** The system the log belongs to. */
   readonly systemId = input.required<string>();
   /** The system's bed ids. */
@@ -52,7 +52,8 @@ export class StopwatchForm {
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
 
-  constructor() {
+  /** Starts with one empty row (the inputs are set by now). */
+  ngOnInit(): void {
     this.addCycle();
   }
 

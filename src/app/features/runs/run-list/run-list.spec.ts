@@ -94,7 +94,7 @@ async function answerPage(
   return request.request.params;
 }
 
-describe('RunList', () => {
+describe('RunList', { timeout: 20_000 }, () => {
   it("asks for the newest runs first and shows each run's cycles, period and lowest tank level", async () => {
     const { fixture, http, root } = await render();
     const params = await answerPage(fixture, http, [item(RUN_A, 3600, '2026-01-01T10:00:00.000Z')]);

@@ -19,6 +19,7 @@ import type { Run, RunListItem, RunSeries } from '../../../../../shared/contract
 import { readApiError } from '../../../core/http/read-api-error';
 import { saveBlob } from '../../../ui/time-series-chart/save-blob';
 import { TimeSeriesChart } from '../../../ui/time-series-chart/time-series-chart';
+import { RunCrossSection } from '../../cross-section/run-cross-section';
 import { UnitPreference } from '../../systems/unit-preference';
 import { chartSet } from '../run-figures';
 import { RunsApi } from '../runs-api';
@@ -41,6 +42,7 @@ import { chartFileName } from './chart-file-name';
     MatMenuModule,
     MatProgressBarModule,
     RouterLink,
+    RunCrossSection,
     RunEvents,
     TimeSeriesChart,
   ],

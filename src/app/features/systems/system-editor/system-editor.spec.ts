@@ -111,7 +111,8 @@ async function openBedsAndType(
   await fixture.whenStable();
 }
 
-describe('SystemEditor', () => {
+// Rendering the whole editor in jsdom takes seconds on a busy machine; the cap is not a speed test.
+describe('SystemEditor', { timeout: 30_000 }, () => {
   it('starts a short live check of the loaded system in the worker', async () => {
     await render();
     const first = RecordingWorker.requests[0];

@@ -19,8 +19,10 @@ import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
 import { MatTabsModule } from '@angular/material/tabs';
+import { MatDialog } from '@angular/material/dialog';
+import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
-import { debounceTime } from 'rxjs';
+import { debounceTime, firstValueFrom } from 'rxjs';
 import type { FieldError } from '../../../../../shared/contracts/api-error';
 import type { System } from '../../../../../shared/contracts/systems';
 import { readApiError } from '../../../core/http/read-api-error';
@@ -40,6 +42,7 @@ import { EventsFields } from './events-fields';
 import { LiveVerdict } from './live-verdict';
 import { PumpFields } from './pump-fields';
 import { RunFields } from './run-fields';
+import { ShareDialog, type ShareDialogData } from './share-dialog';
 import { freshId, newPump } from './new-parts';
 import {
   type DynamicGroup,
@@ -102,6 +105,8 @@ export class SystemEditor {
 
   private readonly api = inject(SystemsApi);
   private readonly router = inject(Router);
+  private readonly dialog = inject(MatDialog);
+  private readonly snackBar = inject(MatSnackBar);
   private readonly destroyRef = inject(DestroyRef);
   protected readonly state = inject(EditorState);
   protected readonly serverRun = inject(ServerRunTracker);
@@ -238,6 +243,16 @@ export class SystemEditor {
     if (this.dirty() && !(await this.save())) return;
     const ended = await this.serverRun.start(system.id);
     if (ended && ended.status !== 'cancelled') await this.router.navigate(['/runs', ended.id]);
+  }
+
+  protected async openShare(): Promise<void> {
+    const system = this.system();
+    if (!system) return;
+    const ref = this.dialog.open<ShareDialog, ShareDialogData, string>(ShareDialog, {
+      data: { systemId: system.id, systemName: system.name },
+    });
+    const done = await firstValueFrom(ref.afterClosed());
+    if (done) this.snackBar.open(done, undefined, { duration: 4000 });
   }
 
   protected async exportScenario(): Promise<void> {

@@ -53,7 +53,7 @@ async function render() {
 const names = (root: HTMLElement) =>
   [...root.querySelectorAll('tbody a.name')].map((a) => a.textContent?.trim());
 
-describe('SystemList', () => {
+describe('SystemList', { timeout: 20_000 }, () => {
   it('lists my systems and shared ones, newest first, with beds, pump flow and last verdict', async () => {
     const { root } = await render();
     expect(names(root)).toEqual(['Tabletop', 'Greenhouse']);

@@ -1,0 +1,314 @@
+import {
+  ChangeDetectionStrategy,
+  Component,
+  DestroyRef,
+  ElementRef,
+  InjectionToken,
+  computed,
+  effect,
+  inject,
+  input,
+  model,
+  signal,
+  untracked,
+  viewChild,
+} from '@angular/core';
+import { MatButtonModule } from '@angular/material/button';
+import { MatButtonToggleModule } from '@angular/material/button-toggle';
+import { MatIconModule } from '@angular/material/icon';
+import type { Scenario, UnitSystem } from '../../../../shared/scenario';
+import { displayScale } from '../../ui/time-series-chart/display-scale';
+import { ELEVATION_WIDTH } from '../systems/elevation-drawing/draw-elevation';
+import { AttributeWriter } from './attribute-writer';
+import { bedReadouts } from './bed-readouts';
+import { type Caption, CaptionPicker } from './caption-picker';
+import type { CrossSectionEvent, CrossSectionSeries } from './cross-section-data';
+import { buildCrossSectionScene } from './cross-section-scene';
+import { drawScene } from './draw-scene';
+import { ExplainPanel } from './explain-panel';
+import { FrameTimer } from './frame-timer';
+import { paintScene } from './paint-scene';
+import { explainPhase } from './phase-explanation';
+import { PlaybackBar } from './playback-bar';
+import { BROWSER_FRAMES, type FrameScheduler, PlaybackController } from './playback-controller';
+import { PresentationScreen } from './presentation-screen';
+import { SHORTCUTS, shortcutFor } from './playback-shortcuts';
+import { sceneFrame } from './scene-frame';
+import type { SceneHandles } from './scene-handles';
+import { SceneSampler } from './scene-sampler';
+
+/** Where animation frames come from (specs hand in a fake they step by hand). */
+export const CROSS_SECTION_FRAMES = new InjectionToken<FrameScheduler>('CROSS_SECTION_FRAMES', {
+  providedIn: 'root',
+  factory: () => BROWSER_FRAMES,
+});
+
+/** Vertical exaggerations offered. */
+export const EXAGGERATIONS: readonly number[] = [1, 2, 4];
+/** A caption stays up at least this long (wall ms) before a newer event replaces it. */
+const CAPTION_HOLD_MS = 2500;
+/** An event is captioned while it is at most this many wall seconds old. */
+const CAPTION_WALL_S = 4;
+
+let nextId = 1;
+
+/**
+ * The animated cross-section of a run: the system in side elevation to scale (with a vertical
+ * exaggeration toggle), water levels from the stored series, water and trapped air inside each
+ * bell, moving marks along the pipes at the speed and density of their flow, the pump's state,
+ * each bed's phase and spill number, captions for events, playback with a scrub bar and event
+ * stepping, an explain panel, keyboard shortcuts and a presentation mode for a projector.
+ *
+ * @example <tw-cross-section [scenario]="scenario" [series]="series" [events]="events" [system]="units()" [(cursorS)]="cursor" />
+ */
+@Component({
+  selector: 'tw-cross-section',
+  imports: [MatButtonModule, MatButtonToggleModule, MatIconModule, ExplainPanel, PlaybackBar],
+  templateUrl: './cross-section.html',
+  styleUrl: './cross-section.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+  host: {
+    '[class.presenting]': 'presenting()',
+    '(keydown)': 'onKey($event)',
+  },
+})
+export class CrossSection {
+  /** The system as run (normalised, SI). */
+  readonly scenario = input.required<Scenario>();
+  /** The run's series: levels, flows and phases. */
+  readonly series = input.required<CrossSectionSeries>();
+  /** The run's events. */
+  readonly events = input<readonly CrossSectionEvent[]>([]);
+  /** The reader's unit system. */
+  readonly system = input<UnitSystem>('metric');
+  /** The shared time cursor, s: follows playback and moves it when set from outside. */
+  readonly cursorS = model<number | null>(null);
+
+  protected readonly id = `tw-xs-${nextId++}`;
+  protected readonly exaggerationOptions = EXAGGERATIONS.map((value) => ({
+    value,
+    label: value === 1 ? 'to scale' : `heights ×${value}`,
+  }));
+  protected readonly shortcuts = SHORTCUTS;
+  protected readonly exaggeration = signal(1);
+  protected readonly captionsOn = signal(true);
+  protected readonly explainOn = signal(false);
+  protected readonly explainBedId = signal<string | null>(null);
+  protected readonly caption = signal<Caption | null>(null);
+  protected readonly screen = new PresentationScreen(
+    inject<ElementRef<HTMLElement>>(ElementRef).nativeElement,
+  );
+  protected readonly presenting = this.screen.presenting;
+  private readonly svgLayer = viewChild.required<ElementRef<SVGGElement>>('layer');
+  private readonly writer = new AttributeWriter();
+  private readonly timer = new FrameTimer();
+  private handles: SceneHandles | null = null;
+  private offsets = new Float64Array(0);
+  private captionShownAtMs = 0;
+  private lastEmittedS: number | null = null;
+  private readonly frames = inject(CROSS_SECTION_FRAMES);
+  readonly playback = new PlaybackController(this.frames, (t, step) => this.drawFrame(t, step));
+
+  protected readonly scene = computed(() => buildCrossSectionScene(this.scenario()));
+  private readonly orderedEvents = computed(() => [...this.events()].sort((a, b) => a.t_s - b.t_s));
+  private readonly sampler = computed(
+    () => new SceneSampler(this.scene(), this.series(), this.orderedEvents()),
+  );
+  private readonly captions = computed(
+    () => new CaptionPicker(this.orderedEvents(), this.system()),
+  );
+  private readonly primingCoefficients = computed(() =>
+    this.scene().beds.map((b) =>
+      b.drain.type === 'bell-siphon' ? b.drain.primingCoefficient : Number.NaN,
+    ),
+  );
+  protected readonly frame = computed(() => sceneFrame(this.scene(), this.exaggeration()));
+  protected readonly viewBox = computed(
+    () => `0 0 ${ELEVATION_WIDTH} ${Math.round(this.frame().height)}`,
+  );
+  protected readonly endS = computed(() => this.sampler().reader.endS);
+  protected readonly startS = computed(() => this.sampler().reader.startS);
+  protected readonly tickEvents = computed(() => this.orderedEvents());
+  protected readonly readouts = computed(() =>
+    bedReadouts(this.scene(), this.sampler(), this.playback.coarseTimeS(), this.system()),
+  );
+  protected readonly showCaptions = computed(() => this.captionsOn() || this.presenting());
+  protected readonly showExplain = computed(() => this.explainOn() || this.presenting());
+  protected readonly presentIcon = computed(() =>
+    this.presenting() ? 'fullscreen_exit' : 'co_present',
+  );
+  protected readonly presentLabel = computed(() =>
+    this.presenting() ? 'Leave presentation' : 'Present',
+  );
+  protected readonly explainedBedId = computed(
+    () => this.explainBedId() ?? this.scene().beds[0]?.id ?? '',
+  );
+  protected readonly bedIds = computed(() => this.scene().beds.map((b) => b.id));
+  protected readonly explanation = computed(() => {
+    const scene = this.scene();
+    const bed = scene.beds.find((b) => b.id === this.explainBedId()) ?? scene.beds[0];
+    const reading = this.readouts().beds.find((b) => b.id === bed?.id)?.reading;
+    if (!bed || !reading) return null;
+    const timeS = this.playback.coarseTimeS();
+    const reader = this.sampler().reader;
+    return explainPhase({
+      scenario: this.scenario(),
+      bed,
+      reader,
+      reading,
+      timeS,
+      system: this.system(),
+    });
+  });
+  protected readonly title = computed(() => `Cross-section of ${this.scenario().name}`);
+  protected readonly description = computed(() => {
+    const scene = this.scene();
+    const exaggeration = this.exaggeration();
+    const scale =
+      exaggeration === 1 ? 'to scale' : `heights drawn ${exaggeration} times their width scale`;
+    return `Side elevation, ${scale}: ${scene.vessels.length} vessels, ${scene.beds.length} beds with their standpipes and bells, ${scene.pumps.length} pump. Water levels, water and air inside each bell, and flows along the pipes follow the run's time.`;
+  });
+
+  constructor() {
+    effect(() => this.redraw());
+    effect(() => {
+      const reader = this.sampler().reader;
+      untracked(() => this.playback.setRange(reader.startS, reader.endS));
+    });
+    effect(() => {
+      const timeS = this.playback.coarseTimeS();
+      untracked(() => {
+        this.lastEmittedS = timeS;
+        this.cursorS.set(timeS);
+      });
+    });
+    effect(() => {
+      const wanted = this.cursorS();
+      untracked(() => {
+        if (wanted !== null && wanted !== this.lastEmittedS) this.playback.seek(wanted);
+      });
+    });
+    inject(DestroyRef).onDestroy(() => {
+      this.playback.dispose();
+      this.screen.dispose();
+    });
+  }
+
+  /** Per-frame paint timings since the last play (median and 95th percentile, ms). */
+  frameTimings(): { frames: number; medianMs: number; p95Ms: number } {
+    return this.timer.summary();
+  }
+
+  protected togglePlay(): void {
+    if (this.playback.playing()) {
+      this.playback.pause();
+      this.timer.report();
+    } else {
+      this.timer.reset();
+      this.playback.play();
+    }
+  }
+
+  protected stepEvent(by: 1 | -1): void {
+    this.playback.stepTo(this.captions().times(), by);
+  }
+
+  protected seek(timeS: number): void {
+    this.playback.seek(timeS);
+  }
+
+  protected setSpeed(speed: number): void {
+    this.playback.setSpeed(speed);
+  }
+
+  protected toggleCaptions(): void {
+    this.captionsOn.update((on) => !on);
+  }
+
+  protected toggleExplain(): void {
+    this.explainOn.update((on) => !on);
+  }
+
+  protected setExaggeration(value: number): void {
+    this.exaggeration.set(value);
+  }
+
+  protected togglePresentation(): void {
+    void this.screen.toggle();
+  }
+
+  protected onKey(event: KeyboardEvent): void {
+    const action = shortcutFor(event);
+    if (!action) return;
+    event.preventDefault();
+    if (action === 'toggle-play') this.togglePlay();
+    else if (action === 'next-event') this.stepEvent(1);
+    else if (action === 'previous-event') this.stepEvent(-1);
+    else if (action === 'forward') this.playback.seek(this.playback.time + 60);
+    else if (action === 'back') this.playback.seek(this.playback.time - 60);
+    else if (action === 'faster') this.playback.stepSpeed(1);
+    else if (action === 'slower') this.playback.stepSpeed(-1);
+    else if (action === 'start') this.playback.seek(this.startS());
+    else if (action === 'end') this.playback.seek(this.endS());
+    else if (action === 'captions') this.toggleCaptions();
+    else if (action === 'explain') this.toggleExplain();
+    else if (action === 'exaggerate') this.cycleExaggeration();
+    else if (action === 'present') this.togglePresentation();
+    else if (action === 'leave') void this.screen.leave();
+  }
+
+  private cycleExaggeration(): void {
+    const index = EXAGGERATIONS.indexOf(this.exaggeration());
+    this.exaggeration.set(EXAGGERATIONS[(index + 1) % EXAGGERATIONS.length] ?? 1);
+  }
+
+  /** Draws the still parts again (scene, scale or units changed), then the current frame. */
+  private redraw(): void {
+    const layer = this.svgLayer().nativeElement;
+    const scene = this.scene();
+    const frame = this.frame();
+    const units = displayScale('length', this.system());
+    this.sampler();
+    untracked(() => {
+      this.writer.clear();
+      this.handles = drawScene(layer, {
+        scene,
+        frame,
+        units,
+        patterns: { gravel: `${this.id}-gravel`, clay: `${this.id}-clay`, air: `${this.id}-air` },
+      });
+      this.offsets = new Float64Array(scene.pipes.length);
+      this.drawFrame(this.playback.time, 0);
+    });
+  }
+
+  /** One animation frame: sample the run at `timeS` and move what changed. */
+  private drawFrame(timeS: number, wallStepS: number): void {
+    const handles = this.handles;
+    if (!handles) return;
+    const started = this.timer.start();
+    const sampler = untracked(() => this.sampler());
+    paintScene(handles, sampler.sample(timeS), {
+      frame: untracked(() => this.frame()),
+      writer: this.writer,
+      busiestM3PerS: sampler.busiestM3PerS,
+      wallStepS,
+      offsets: this.offsets,
+      primingCoefficients: untracked(() => this.primingCoefficients()),
+      speed: untracked(() => this.playback.speed()),
+    });
+    this.updateCaption(timeS, wallStepS === 0);
+    this.timer.stop(started);
+  }
+
+  private updateCaption(timeS: number, jumped: boolean): void {
+    const now = this.frames.now();
+    const maxAgeS = Math.max(1, untracked(() => this.playback.speed()) * CAPTION_WALL_S);
+    const next = untracked(() => this.captions()).at(timeS, maxAgeS);
+    const current = untracked(() => this.caption());
+    if (next?.key === current?.key) return;
+    if (!jumped && current !== null && now - this.captionShownAtMs < CAPTION_HOLD_MS) return;
+    this.captionShownAtMs = now;
+    this.caption.set(next);
+  }
+}
