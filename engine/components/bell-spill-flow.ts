@@ -1,7 +1,6 @@
 import type { Standpipe } from '../../shared/scenario';
 import { torricelliOutflowM3PerS } from '../hydraulics/torricelli-outflow';
 import { STANDARD_GRAVITY_M_PER_S2 as G } from '../hydraulics/standard-gravity';
-import { weirFlowM3PerS } from '../hydraulics/weir-flow';
 
 /**
  * Flow spilling over a standpipe rim, m³/s, at head `headM` (m) above the rim:
@@ -17,7 +16,8 @@ export function bellSpillFlowM3PerS(standpipe: Standpipe, headM: number, boreCon
   if (!(headM > 0)) return 0;
   const boreAreaM2 = (Math.PI / 4) * standpipe.innerDiameter ** 2;
   if (boreControls === true) return torricelliOutflowM3PerS(standpipe.dischargeCoefficient, boreAreaM2, headM);
-  const weir = weirFlowM3PerS(standpipe.weirCoefficient, Math.PI * standpipe.outerDiameter, headM);
+  // weirFlowM3PerS's law C_w·L·H^1.5, written with √ because it runs in every right-hand side.
+  const weir = standpipe.weirCoefficient * Math.PI * standpipe.outerDiameter * headM * Math.sqrt(headM);
   if (boreControls === false) return weir;
   return Math.min(weir, torricelliOutflowM3PerS(standpipe.dischargeCoefficient, boreAreaM2, headM));
 }

@@ -1,6 +1,5 @@
 import type { Overflow } from '../../shared/scenario';
 import { torricelliOutflowM3PerS } from '../hydraulics/torricelli-outflow';
-import { weirFlowM3PerS } from '../hydraulics/weir-flow';
 import type { ModelComponent, ModelContext } from '../system/model-context';
 import type { VesselComponent } from './vessel';
 
@@ -14,7 +13,8 @@ import type { VesselComponent } from './vessel';
  */
 export function overflowFlowM3PerS(overflow: Overflow, headM: number): number {
   if (!(headM > 0)) return 0;
-  const weir = weirFlowM3PerS(overflow.weirCoefficient, overflow.diameter, headM);
+  // weirFlowM3PerS's law C_w·L·H^1.5, written with √ because it runs in every right-hand side.
+  const weir = overflow.weirCoefficient * overflow.diameter * headM * Math.sqrt(headM);
   const areaM2 = (Math.PI / 4) * overflow.diameter ** 2;
   return Math.min(weir, torricelliOutflowM3PerS(overflow.dischargeCoefficient, areaM2, headM));
 }

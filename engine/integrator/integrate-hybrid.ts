@@ -62,6 +62,7 @@ class HybridRun {
   private tinySteps = 0;
   private extraEvaluations = 0;
   private naturalStepS = 0;
+  private readonly firedScratch: number[] = [];
   private learning: number[] = [];
   private readonly learnedStepS: Float64Array;
 
@@ -172,10 +173,11 @@ class HybridRun {
     }
   }
 
-  /** Evaluates the events at (t, y) into gValues and lists the armed ones that are ≤ 0. */
+  /** Evaluates the events at (t, y) into gValues and lists the armed ones that are ≤ 0 (a reused array). */
   private firedEvents(y: Float64Array, timeS: number): number[] {
     this.system.eventValues(this.gValues, y, timeS);
-    const fired: number[] = [];
+    const fired = this.firedScratch;
+    fired.length = 0;
     for (let i = 0; i < this.gValues.length; i += 1) {
       const g = this.gValues[i] as number;
       if (Number.isNaN(g)) throw new IntegrationFailure(`event function ${i} is NaN at t = ${timeS} s`);
