@@ -36,28 +36,65 @@ export interface CsvOptionsForm {
 /** A blank form: ISO-or-guessed times in UTC, a level column in mm, one bed. */
 export function blankCsvOptionsForm(): CsvOptionsForm {
   return {
-    name: '', delimiter: 'auto', decimal: '.', headerLine: null, hasHeader: true,
-    timeColumn: '', timeFormat: 'auto', timeZone: 'UTC',
-    levelKind: 'level', levelColumn: '', lengthUnit: 'mm', zeroOffsetM: null, mountingHeightM: null,
-    pressureUnit: 'kPa', reference: 'gauge', barometricColumn: '', barometricUnit: 'hPa', barometricPressure: null,
-    sensorHeightM: null, waterTemperatureC: null, bedMode: 'fixed', bed: '', bedColumn: '',
+    name: '',
+    delimiter: 'auto',
+    decimal: '.',
+    headerLine: null,
+    hasHeader: true,
+    timeColumn: '',
+    timeFormat: 'auto',
+    timeZone: 'UTC',
+    levelKind: 'level',
+    levelColumn: '',
+    lengthUnit: 'mm',
+    zeroOffsetM: null,
+    mountingHeightM: null,
+    pressureUnit: 'kPa',
+    reference: 'gauge',
+    barometricColumn: '',
+    barometricUnit: 'hPa',
+    barometricPressure: null,
+    sensorHeightM: null,
+    waterTemperatureC: null,
+    bedMode: 'fixed',
+    bed: '',
+    bedColumn: '',
   };
 }
 
 function level(form: CsvOptionsForm): CsvImportOptionsInput['level'] {
   if (form.levelKind === 'distance') {
-    return { kind: 'distance', column: form.levelColumn, unit: form.lengthUnit, mountingHeight: form.mountingHeightM ?? 0 };
+    return {
+      kind: 'distance',
+      column: form.levelColumn,
+      unit: form.lengthUnit,
+      mountingHeight: form.mountingHeightM ?? 0,
+    };
   }
   if (form.levelKind === 'pressure') {
     return {
-      kind: 'pressure', column: form.levelColumn, unit: form.pressureUnit, reference: form.reference,
-      ...(form.reference === 'absolute' && form.barometricColumn ? { barometricColumn: form.barometricColumn, barometricUnit: form.barometricUnit } : {}),
-      ...(form.reference === 'absolute' && !form.barometricColumn && form.barometricPressure !== null ? { barometricPressure: form.barometricPressure } : {}),
+      kind: 'pressure',
+      column: form.levelColumn,
+      unit: form.pressureUnit,
+      reference: form.reference,
+      ...(form.reference === 'absolute' && form.barometricColumn
+        ? { barometricColumn: form.barometricColumn, barometricUnit: form.barometricUnit }
+        : {}),
+      ...(form.reference === 'absolute' &&
+      !form.barometricColumn &&
+      form.barometricPressure !== null
+        ? { barometricPressure: form.barometricPressure }
+        : {}),
       ...(form.sensorHeightM !== null ? { sensorHeight: form.sensorHeightM } : {}),
       ...(form.waterTemperatureC !== null ? { waterTemperatureC: form.waterTemperatureC } : {}),
     };
   }
-  return { kind: 'level', column: form.levelColumn, unit: form.lengthUnit, ...(form.zeroOffsetM !== null ? { zeroOffset: form.zeroOffsetM } : {}) };
+  return {
+    kind: 'level',
+    column: form.levelColumn,
+    unit: form.lengthUnit,
+    ...(form.zeroOffsetM !== null ? { zeroOffset: form.zeroOffsetM } : {}),
+  };
 }
 
 /** The options the form describes, as the API takes them. */
@@ -68,7 +105,11 @@ export function csvOptionsFromForm(form: CsvOptionsForm): CsvImportOptionsInput 
     decimal: form.decimal,
     ...(form.headerLine !== null ? { headerLine: form.headerLine } : {}),
     hasHeader: form.hasHeader,
-    time: { column: form.timeColumn, format: form.timeFormat, timeZone: form.timeZone.trim() || 'UTC' },
+    time: {
+      column: form.timeColumn,
+      format: form.timeFormat,
+      timeZone: form.timeZone.trim() || 'UTC',
+    },
     level: level(form),
     ...(form.bedMode === 'column' ? { bedColumn: form.bedColumn } : { bed: form.bed }),
   };
@@ -83,7 +124,10 @@ function num(value: unknown): number | null {
 }
 
 /** The form for options the server used or guessed (numbers in SI, as it answers them). */
-export function csvOptionsFormFrom(options: Record<string, unknown>, base: CsvOptionsForm = blankCsvOptionsForm()): CsvOptionsForm {
+export function csvOptionsFormFrom(
+  options: Record<string, unknown>,
+  base: CsvOptionsForm = blankCsvOptionsForm(),
+): CsvOptionsForm {
   const time = (options['time'] ?? {}) as Record<string, unknown>;
   const lv = (options['level'] ?? {}) as Record<string, unknown>;
   const kind = lv['kind'] === 'distance' || lv['kind'] === 'pressure' ? lv['kind'] : 'level';
@@ -98,8 +142,12 @@ export function csvOptionsFormFrom(options: Record<string, unknown>, base: CsvOp
     timeZone: text(time['timeZone'], base.timeZone),
     levelKind: kind,
     levelColumn: text(lv['column'], base.levelColumn),
-    lengthUnit: kind === 'pressure' ? base.lengthUnit : (text(lv['unit'], base.lengthUnit) as LengthUnit),
-    pressureUnit: kind === 'pressure' ? (text(lv['unit'], base.pressureUnit) as PressureUnit) : base.pressureUnit,
+    lengthUnit:
+      kind === 'pressure' ? base.lengthUnit : (text(lv['unit'], base.lengthUnit) as LengthUnit),
+    pressureUnit:
+      kind === 'pressure'
+        ? (text(lv['unit'], base.pressureUnit) as PressureUnit)
+        : base.pressureUnit,
     zeroOffsetM: num(lv['zeroOffset']),
     mountingHeightM: num(lv['mountingHeight']) ?? base.mountingHeightM,
     reference: lv['reference'] === 'absolute' ? 'absolute' : 'gauge',

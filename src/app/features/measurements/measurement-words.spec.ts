@@ -1,5 +1,11 @@
 import type { CalibrationFit, ComparisonRow } from '../../../../shared/contracts/measurements';
-import { calibrationLines, coefficientText, differenceText, figureText, fitSentence } from './measurement-words';
+import {
+  calibrationLines,
+  coefficientText,
+  differenceText,
+  figureText,
+  fitSentence,
+} from './measurement-words';
 
 describe('measurement words', () => {
   it('shows times and levels in the reader’s units', () => {
@@ -10,7 +16,14 @@ describe('measurement words', () => {
   });
 
   it('signs a difference and gives its relative size', () => {
-    const row: ComparisonRow = { metric: 'drain', unit: 's', measured: 360, simulated: 245, difference: -115, relative: -0.3194 };
+    const row: ComparisonRow = {
+      metric: 'drain',
+      unit: 's',
+      measured: 360,
+      simulated: 245,
+      difference: -115,
+      relative: -0.3194,
+    };
     expect(differenceText(row, 'metric')).toMatch(/^−.+ \(−31\.9 %\)$/);
     expect(differenceText({ ...row, difference: null, relative: null }, 'metric')).toBe('–');
   });
@@ -23,10 +36,20 @@ describe('measurement words', () => {
 
   it('sums up a fit and the values kept on a system', () => {
     const fit: CalibrationFit = {
-      status: 'converged', message: 'Converged.', iterations: 5, evaluations: 24, chiSquareBefore: 3045, chiSquareAfter: 0.5,
-      rmsNormalisedResidual: 0.4, degreesOfFreedom: 0, wallMs: 2700, residuals: [],
+      status: 'converged',
+      message: 'Converged.',
+      iterations: 5,
+      evaluations: 24,
+      chiSquareBefore: 3045,
+      chiSquareAfter: 0.5,
+      rmsNormalisedResidual: 0.4,
+      degreesOfFreedom: 0,
+      wallMs: 2700,
+      residuals: [],
     };
-    expect(fitSentence(fit)).toBe('Converged. χ² 3.05e+3 → 0.500 (5 iterations, 24 simulations, 2.7 s).');
+    expect(fitSentence(fit)).toBe(
+      'Converged. χ² 3.05e+3 → 0.500 (5 iterations, 24 simulations, 2.7 s).',
+    );
     const lines = calibrationLines({
       calibrationId: '11111111-1111-4111-8111-111111111111',
       beds: [{ bed: 'bed-a', primingCoefficient: 0.552, dischargeLossMultiplier: 1.61 }],
@@ -34,6 +57,9 @@ describe('measurement words', () => {
       appliedAt: '2024-06-01T10:00:00.000Z',
       appliedBy: { id: '22222222-2222-4222-8222-222222222222', name: 'Cal' },
     });
-    expect(lines).toEqual(['bed-a: k_p 0.552, drain-loss multiplier 1.610', 'pump: flow scale 0.842']);
+    expect(lines).toEqual([
+      'bed-a: k_p 0.552, drain-loss multiplier 1.610',
+      'pump: flow scale 0.842',
+    ]);
   });
 });

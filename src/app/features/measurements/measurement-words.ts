@@ -34,20 +34,25 @@ export function differenceText(row: ComparisonRow, system: UnitSystem): string {
   if (row.difference === null) return '–';
   const sign = row.difference > 0 ? '+' : row.difference < 0 ? '−' : '±';
   const magnitude = figureText(Math.abs(row.difference), row.unit, system);
-  const relative = row.relative === null ? '' : ` (${sign}${Math.abs(row.relative * 100).toFixed(1)} %)`;
+  const relative =
+    row.relative === null ? '' : ` (${sign}${Math.abs(row.relative * 100).toFixed(1)} %)`;
   return `${sign}${magnitude}${relative}`;
 }
 
 /** A coefficient with its standard error, e.g. "0.552 ± 0.008". */
 export function coefficientText(value: number, standardError: number | null): string {
-  const digits = standardError && standardError > 0 ? Math.max(0, Math.min(6, -Math.floor(Math.log10(standardError)))) : 3;
+  const digits =
+    standardError && standardError > 0
+      ? Math.max(0, Math.min(6, -Math.floor(Math.log10(standardError))))
+      : 3;
   const main = value.toFixed(digits);
   return standardError === null ? main : `${main} ± ${standardError.toFixed(digits)}`;
 }
 
 /** What the fit status means, in one sentence with χ² before and after. */
 export function fitSentence(fit: CalibrationFit): string {
-  const chi = (v: number | null): string => (v === null ? '–' : v < 0.01 ? v.toExponential(1) : v.toPrecision(3));
+  const chi = (v: number | null): string =>
+    v === null ? '–' : v < 0.01 ? v.toExponential(1) : v.toPrecision(3);
   const effort = `${fit.iterations} iterations, ${fit.evaluations} simulations, ${(fit.wallMs / 1000).toFixed(1)} s`;
   return `${fit.message} χ² ${chi(fit.chiSquareBefore)} → ${chi(fit.chiSquareAfter)} (${effort}).`;
 }
@@ -57,9 +62,14 @@ export function calibrationLines(calibration: SystemCalibration): string[] {
   const beds = calibration.beds.map((b) => {
     const parts = [
       b.primingCoefficient === undefined ? null : `k_p ${b.primingCoefficient.toFixed(3)}`,
-      b.dischargeLossMultiplier === undefined ? null : `drain-loss multiplier ${b.dischargeLossMultiplier.toFixed(3)}`,
+      b.dischargeLossMultiplier === undefined
+        ? null
+        : `drain-loss multiplier ${b.dischargeLossMultiplier.toFixed(3)}`,
     ].filter((p): p is string => p !== null);
     return `${b.bed}: ${parts.join(', ')}`;
   });
-  return [...beds, ...calibration.pumps.map((p) => `${p.pump}: flow scale ${p.flowScale.toFixed(3)}`)];
+  return [
+    ...beds,
+    ...calibration.pumps.map((p) => `${p.pump}: flow scale ${p.flowScale.toFixed(3)}`),
+  ];
 }

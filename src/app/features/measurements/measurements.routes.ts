@@ -4,12 +4,14 @@ import type { Routes } from '@angular/router';
 export const measurementsRoutes: Routes = [
   {
     path: '',
-    loadComponent: () => import('./measurements-page/measurements-page').then((m) => m.MeasurementsPage),
+    loadComponent: () =>
+      import('./measurements-page/measurements-page').then((m) => m.MeasurementsPage),
     title: 'Measurements · Tidewright',
   },
   {
     path: ':measurementId/compare',
-    loadComponent: () => import('./measurement-compare/measurement-compare').then((m) => m.MeasurementCompare),
+    loadComponent: () =>
+      import('./measurement-compare/measurement-compare').then((m) => m.MeasurementCompare),
     title: 'Measured and simulated · Tidewright',
   },
 ];

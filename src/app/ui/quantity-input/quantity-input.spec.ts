@@ -107,4 +107,23 @@ describe('QuantityInput', () => {
     await typeInto(fixture, field, '212');
     expect(host.control.value).toBeCloseTo(100, 9);
   });
+
+  it('shows and reads a field in its own unit when one is given', async () => {
+    TestBed.configureTestingModule({});
+    const fixture = TestBed.createComponent(QuantityInput);
+    fixture.componentRef.setInput('label', 'Simulated time');
+    fixture.componentRef.setInput('dimension', 'time');
+    fixture.componentRef.setInput('unit', 'h');
+    const changes: (number | null)[] = [];
+    fixture.componentInstance.registerOnChange((value) => changes.push(value));
+    fixture.componentInstance.writeValue(21600);
+    await fixture.whenStable();
+    const root = fixture.nativeElement as HTMLElement;
+    const field = root.querySelector('input');
+    if (!field) throw new Error('No input.');
+    expect(field.value).toBe('6');
+    expect(root.querySelector('.unit')?.textContent?.trim()).toBe('h');
+    await typeInto(fixture, field, '1.5');
+    expect(changes).toEqual([5400]);
+  });
 });

@@ -15,6 +15,7 @@ import { MatInput, MatInputModule } from '@angular/material/input';
 import {
   type Dimension,
   type UnitSystem,
+  fromDisplay,
   parseQuantity,
   toDisplay,
 } from '../../../../shared/scenario';
@@ -53,6 +54,11 @@ export class QuantityInput implements ControlValueAccessor {
   readonly error = input<string | null>(null);
   /** A short hint under the field when there is no error. */
   readonly hint = input('');
+  /**
+   * A unit to show instead of the system's (a mathjs unit without an offset, e.g. "h" for a run
+   * that lasts hours), or null.
+   */
+  readonly unit = input<string | null>(null);
 
   private readonly valueSi = signal<number | null>(null);
   private readonly draft = signal<string | null>(null);
@@ -63,7 +69,11 @@ export class QuantityInput implements ControlValueAccessor {
 
   /** The unit label after the number ("mm", "gal/min"), empty for plain numbers. */
   protected readonly unitLabel = computed(
-    () => toDisplay(1, this.dimension(), this.system()).label,
+    () => this.unit() ?? toDisplay(1, this.dimension(), this.system()).label,
+  );
+  /** The mathjs unit bare numbers are read and shown in. */
+  private readonly displayUnit = computed(
+    () => this.unit() ?? toDisplay(1, this.dimension(), this.system()).unit,
   );
   /** What the field shows: what is being typed, else the stored value in display units. */
   protected readonly text = computed(() => this.draft() ?? this.displayText());
@@ -112,7 +122,7 @@ export class QuantityInput implements ControlValueAccessor {
   protected readTyping(event: Event): void {
     const text = (event.target as HTMLInputElement).value;
     this.draft.set(text);
-    const reading = readTypedQuantity(text, this.dimension(), this.system());
+    const reading = readTypedQuantity(text, this.dimension(), this.displayUnit());
     this.typingError.set(reading.success ? null : reading.message);
     if (!reading.success) return;
     this.valueSi.set(reading.valueSi);
@@ -127,7 +137,11 @@ export class QuantityInput implements ControlValueAccessor {
   private displayText(): string {
     const si = this.valueSi();
     if (si === null) return '';
-    const shown = toDisplay(si, this.dimension(), this.system()).value;
+    const unit = this.unit();
+    const shown =
+      unit === null
+        ? toDisplay(si, this.dimension(), this.system()).value
+        : si / fromDisplay(1, unit, this.dimension());
     return String(Number(shown.toPrecision(EDIT_DIGITS)));
   }
 }

@@ -1,15 +1,33 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  inject,
+  input,
+  output,
+  signal,
+} from '@angular/core';
 import { FormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
 import { MatIconModule } from '@angular/material/icon';
 import { MatProgressBarModule } from '@angular/material/progress-bar';
-import type { Calibration, CalibrationParameterKey, Measurement } from '../../../../../shared/contracts/measurements';
+import type {
+  Calibration,
+  CalibrationParameterKey,
+  Measurement,
+} from '../../../../../shared/contracts/measurements';
 import type { UnitSystem } from '../../../../../shared/scenario';
 import { readApiError } from '../../../core/http/read-api-error';
 import { MeasurementsApi } from '../measurements-api';
-import { COEFFICIENT_NAMES, FIGURE_NAMES, coefficientText, figureText, fitSentence } from '../measurement-words';
+import {
+  COEFFICIENT_NAMES,
+  FIGURE_NAMES,
+  coefficientText,
+  figureText,
+  fitSentence,
+} from '../measurement-words';
 
 /**
  * Fit the model to measurements: choose the logs and the coefficients, run the fit on the server
@@ -35,7 +53,11 @@ export class CalibrationPanel {
 
   private readonly api = inject(MeasurementsApi);
   protected readonly chosen = signal<ReadonlySet<string>>(new Set());
-  protected readonly fit = signal<Record<CalibrationParameterKey, boolean>>({ primingCoefficient: true, dischargeLossMultiplier: true, flowScale: false });
+  protected readonly fit = signal<Record<CalibrationParameterKey, boolean>>({
+    primingCoefficient: true,
+    dischargeLossMultiplier: true,
+    flowScale: false,
+  });
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
   protected readonly result = signal<Calibration | null>(null);
@@ -88,7 +110,12 @@ export class CalibrationPanel {
   protected async runFit(): Promise<void> {
     await this.act(async () => {
       this.result.set(null);
-      this.result.set(await this.api.calibrate(this.systemId(), { measurementIds: [...this.chosen()], fit: this.fit() }));
+      this.result.set(
+        await this.api.calibrate(this.systemId(), {
+          measurementIds: [...this.chosen()],
+          fit: this.fit(),
+        }),
+      );
       this.changed.emit();
     });
   }

@@ -1,5 +1,13 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, inject, input, output, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  inject,
+  input,
+  output,
+  signal,
+} from '@angular/core';
 import { FormControl, FormGroup, ReactiveFormsModule } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatCheckboxModule } from '@angular/material/checkbox';
@@ -17,7 +25,12 @@ import {
 import type { UnitSystem } from '../../../../../shared/scenario';
 import { readApiError } from '../../../core/http/read-api-error';
 import { QuantityInput } from '../../../ui/quantity-input/quantity-input';
-import { blankCsvOptionsForm, csvOptionsFormFrom, csvOptionsFromForm, type CsvOptionsForm } from '../csv-options';
+import {
+  blankCsvOptionsForm,
+  csvOptionsFormFrom,
+  csvOptionsFromForm,
+  type CsvOptionsForm,
+} from '../csv-options';
 import { MeasurementsApi, type CsvSource } from '../measurements-api';
 import { figureText } from '../measurement-words';
 
@@ -25,7 +38,12 @@ type OptionsControls = { [K in keyof CsvOptionsForm]: FormControl<CsvOptionsForm
 
 function optionsGroup(): FormGroup<OptionsControls> {
   const blank = blankCsvOptionsForm();
-  const controls = Object.fromEntries(Object.entries(blank).map(([key, value]) => [key, new FormControl(value, { nonNullable: true })]));
+  const controls = Object.fromEntries(
+    Object.entries(blank).map(([key, value]) => [
+      key,
+      new FormControl(value, { nonNullable: true }),
+    ]),
+  );
   return new FormGroup(controls as unknown as OptionsControls);
 }
 
@@ -94,7 +112,9 @@ export class CsvUpload {
     return source === null ? null : source.kind === 'file' ? source.file.name : source.fileName;
   });
   protected readonly rows = computed(() =>
-    (this.preview()?.rows ?? []).slice(0, 20).map((r) => ({ ...r, level: figureText(r.level_m, 'm', this.system()) })),
+    (this.preview()?.rows ?? [])
+      .slice(0, 20)
+      .map((r) => ({ ...r, level: figureText(r.level_m, 'm', this.system()) })),
   );
   protected readonly rejected = computed(() => (this.preview()?.rejected ?? []).slice(0, 20));
 
@@ -148,7 +168,11 @@ export class CsvUpload {
     const source = this.source();
     if (!source) return;
     await this.run(async () => {
-      const measurement = await this.api.create(this.systemId(), source, csvOptionsFromForm(this.form.getRawValue()));
+      const measurement = await this.api.create(
+        this.systemId(),
+        source,
+        csvOptionsFromForm(this.form.getRawValue()),
+      );
       this.saved.emit(measurement);
       this.source.set(null);
       this.preview.set(null);

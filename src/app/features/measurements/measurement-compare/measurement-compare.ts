@@ -1,5 +1,13 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  input,
+  signal,
+} from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
@@ -23,7 +31,14 @@ import { FIGURE_NAMES, differenceText, figureText } from '../measurement-words';
  */
 @Component({
   selector: 'tw-measurement-compare',
-  imports: [MatButtonModule, MatFormFieldModule, MatIconModule, MatSelectModule, RouterLink, TimeSeriesChart],
+  imports: [
+    MatButtonModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatSelectModule,
+    RouterLink,
+    TimeSeriesChart,
+  ],
   templateUrl: './measurement-compare.html',
   styleUrl: './measurement-compare.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -46,12 +61,22 @@ export class MeasurementCompare {
 
   protected readonly simulated = computed<ChartSeriesSet | null>(() => {
     const c = this.comparison();
-    return c ? { t_s: c.simulatedSeries.t_s, lines: [{ id: 'level', label: `${c.bed} level`, values: c.simulatedSeries.level_m }] } : null;
+    return c
+      ? {
+          t_s: c.simulatedSeries.t_s,
+          lines: [{ id: 'level', label: `${c.bed} level`, values: c.simulatedSeries.level_m }],
+        }
+      : null;
   });
   protected readonly measured = computed<ChartSeriesSet | null>(() => {
     const c = this.comparison();
     const series = c?.measuredSeries;
-    return c && series ? { t_s: series.t_s, lines: [{ id: 'level', label: `${c.bed} level`, values: series.level_m }] } : null;
+    return c && series
+      ? {
+          t_s: series.t_s,
+          lines: [{ id: 'level', label: `${c.bed} level`, values: series.level_m }],
+        }
+      : null;
   });
   protected readonly rows = computed(() =>
     (this.comparison()?.rows ?? []).map((row) => ({
@@ -62,7 +87,9 @@ export class MeasurementCompare {
       difference: differenceText(row, this.units()),
     })),
   );
-  protected readonly offset = computed(() => figureText(this.comparison()?.offsetS ?? null, 's', this.units()));
+  protected readonly offset = computed(() =>
+    figureText(this.comparison()?.offsetS ?? null, 's', this.units()),
+  );
 
   constructor() {
     effect(() => void this.loadRuns(this.systemId()));
@@ -74,7 +101,11 @@ export class MeasurementCompare {
 
   private async loadRuns(systemId: string): Promise<void> {
     try {
-      this.runList.set((await this.runs.list(systemId, { pageSize: 20 })).items.filter((r) => r.status === 'completed' || r.status === 'stopped'));
+      this.runList.set(
+        (await this.runs.list(systemId, { pageSize: 20 })).items.filter(
+          (r) => r.status === 'completed' || r.status === 'stopped',
+        ),
+      );
     } catch {
       this.runList.set([]);
     }

@@ -1,12 +1,24 @@
 import { DatePipe } from '@angular/common';
 import { HttpErrorResponse } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  computed,
+  effect,
+  inject,
+  input,
+  signal,
+} from '@angular/core';
 import { MatButtonModule } from '@angular/material/button';
 import { MatDialog } from '@angular/material/dialog';
 import { MatIconModule } from '@angular/material/icon';
 import { MatMenuModule } from '@angular/material/menu';
 import { Router, RouterLink } from '@angular/router';
-import type { Calibration, Measurement, SystemCalibration } from '../../../../../shared/contracts/measurements';
+import type {
+  Calibration,
+  Measurement,
+  SystemCalibration,
+} from '../../../../../shared/contracts/measurements';
 import type { RunListItem } from '../../../../../shared/contracts/runs';
 import type { System } from '../../../../../shared/contracts/systems';
 import { parseScenario } from '../../../../../shared/scenario';
@@ -28,7 +40,16 @@ import { StopwatchForm } from '../stopwatch-form/stopwatch-form';
  */
 @Component({
   selector: 'tw-measurements-page',
-  imports: [DatePipe, MatButtonModule, MatIconModule, MatMenuModule, RouterLink, CsvUpload, StopwatchForm, CalibrationPanel],
+  imports: [
+    DatePipe,
+    MatButtonModule,
+    MatIconModule,
+    MatMenuModule,
+    RouterLink,
+    CsvUpload,
+    StopwatchForm,
+    CalibrationPanel,
+  ],
   templateUrl: './measurements-page.html',
   styleUrl: './measurements-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -61,18 +82,31 @@ export class MeasurementsPage {
   });
   protected readonly vessels = computed(() => {
     const all = this.vesselList();
-    return [...all.filter((v) => v.kind === 'bed'), ...all.filter((v) => v.kind !== 'bed')].map((v) => v.id);
+    return [...all.filter((v) => v.kind === 'bed'), ...all.filter((v) => v.kind !== 'bed')].map(
+      (v) => v.id,
+    );
   });
-  protected readonly beds = computed(() => this.vesselList().filter((v) => v.kind === 'bed').map((v) => v.id));
+  protected readonly beds = computed(() =>
+    this.vesselList()
+      .filter((v) => v.kind === 'bed')
+      .map((v) => v.id),
+  );
   protected readonly currentLines = computed(() => {
     const current = this.current();
     return current ? calibrationLines(current) : [];
   });
-  protected readonly completedRuns = computed(() => this.runList().filter((r) => r.status === 'completed' || r.status === 'stopped'));
+  protected readonly completedRuns = computed(() =>
+    this.runList().filter((r) => r.status === 'completed' || r.status === 'stopped'),
+  );
   protected readonly history = computed(() =>
     this.calibrations().map((c) => ({
       calibration: c,
-      values: c.parameters.map((p) => `${COEFFICIENT_NAMES[p.key]} (${p.target}) ${coefficientText(p.fitted, p.standardError)}`).join('; '),
+      values: c.parameters
+        .map(
+          (p) =>
+            `${COEFFICIENT_NAMES[p.key]} (${p.target}) ${coefficientText(p.fitted, p.standardError)}`,
+        )
+        .join('; '),
     })),
   );
 
@@ -112,14 +146,20 @@ export class MeasurementsPage {
   /** Reloads fits and the kept values after the calibration panel changed them. */
   protected async calibrationChanged(): Promise<void> {
     const systemId = this.systemId();
-    const [calibrations, current] = await Promise.all([this.api.calibrations(systemId), this.api.current(systemId)]);
+    const [calibrations, current] = await Promise.all([
+      this.api.calibrations(systemId),
+      this.api.current(systemId),
+    ]);
     this.calibrations.set(calibrations.items);
     this.current.set(current.calibration);
   }
 
   /** Opens the overlay of a log on a run. */
   protected compare(measurement: Measurement, run: RunListItem): void {
-    void this.router.navigate(['/systems', this.systemId(), 'measurements', measurement.id, 'compare'], { queryParams: { run: run.id } });
+    void this.router.navigate(
+      ['/systems', this.systemId(), 'measurements', measurement.id, 'compare'],
+      { queryParams: { run: run.id } },
+    );
   }
 
   /** Where a log's original file downloads from. */
@@ -158,7 +198,8 @@ export class MeasurementsPage {
   protected async clear(): Promise<void> {
     const ok = await confirmAction(this.dialog, {
       title: 'Use the scenario’s own coefficients?',
-      message: 'Later runs will no longer use the calibrated values. The fits stay in the list and can be kept again.',
+      message:
+        'Later runs will no longer use the calibrated values. The fits stay in the list and can be kept again.',
       confirmLabel: 'Stop using them',
     });
     if (!ok) return;

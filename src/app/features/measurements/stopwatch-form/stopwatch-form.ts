@@ -1,12 +1,23 @@
 import { HttpErrorResponse } from '@angular/common/http';
-import { ChangeDetectionStrategy, Component, type OnInit, inject, input, output, signal } from '@angular/core';
+import {
+  ChangeDetectionStrategy,
+  Component,
+  type OnInit,
+  inject,
+  input,
+  output,
+  signal,
+} from '@angular/core';
 import { FormArray, FormControl, FormGroup, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButtonModule } from '@angular/material/button';
 import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatIconModule } from '@angular/material/icon';
 import { MatInputModule } from '@angular/material/input';
 import { MatSelectModule } from '@angular/material/select';
-import type { CreateStopwatchRequest, Measurement } from '../../../../../shared/contracts/measurements';
+import type {
+  CreateStopwatchRequest,
+  Measurement,
+} from '../../../../../shared/contracts/measurements';
 import type { UnitSystem } from '../../../../../shared/scenario';
 import { readApiError } from '../../../core/http/read-api-error';
 import { QuantityInput } from '../../../ui/quantity-input/quantity-input';
@@ -31,7 +42,15 @@ const READING = /^\s*(\d+(:\d{1,2}){0,2}(\.\d+)?|\d+(\.\d+)?\s*[a-z]+)\s*$/i;
  */
 @Component({
   selector: 'tw-stopwatch-form',
-  imports: [MatButtonModule, MatFormFieldModule, MatIconModule, MatInputModule, MatSelectModule, QuantityInput, ReactiveFormsModule],
+  imports: [
+    MatButtonModule,
+    MatFormFieldModule,
+    MatIconModule,
+    MatInputModule,
+    MatSelectModule,
+    QuantityInput,
+    ReactiveFormsModule,
+  ],
   templateUrl: './stopwatch-form.html',
   styleUrl: './stopwatch-form.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -47,7 +66,10 @@ export class StopwatchForm implements OnInit {
   readonly saved = output<Measurement>();
 
   private readonly api = inject(MeasurementsApi);
-  protected readonly name = new FormControl('Stopwatch log', { nonNullable: true, validators: [Validators.required] });
+  protected readonly name = new FormControl('Stopwatch log', {
+    nonNullable: true,
+    validators: [Validators.required],
+  });
   protected readonly cycles = new FormArray<FormGroup<CycleControls>>([]);
   protected readonly busy = signal(false);
   protected readonly error = signal<string | null>(null);
@@ -60,10 +82,17 @@ export class StopwatchForm implements OnInit {
   /** Adds a row for one more timed cycle (same bed as the last row). */
   protected addCycle(): void {
     const last = this.cycles.at(this.cycles.length - 1) as FormGroup<CycleControls> | undefined;
-    const reading = (): FormControl<string> => new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.pattern(READING)] });
+    const reading = (): FormControl<string> =>
+      new FormControl('', {
+        nonNullable: true,
+        validators: [Validators.required, Validators.pattern(READING)],
+      });
     this.cycles.push(
       new FormGroup<CycleControls>({
-        bed: new FormControl(last?.controls.bed.value ?? this.beds()[0] ?? '', { nonNullable: true, validators: [Validators.required] }),
+        bed: new FormControl(last?.controls.bed.value ?? this.beds()[0] ?? '', {
+          nonNullable: true,
+          validators: [Validators.required],
+        }),
         fillTime: reading(),
         drainTime: reading(),
         highMark: new FormControl<number | null>(null),
@@ -102,7 +131,11 @@ export class StopwatchForm implements OnInit {
     } catch (error) {
       const body = error instanceof HttpErrorResponse ? readApiError(error.error) : null;
       const fields = body?.error.fields?.map((f) => `${f.path}: ${f.message}`).join(' ') ?? '';
-      this.error.set(body ? `${body.error.message} ${fields}`.trim() : 'The server could not be reached; try again.');
+      this.error.set(
+        body
+          ? `${body.error.message} ${fields}`.trim()
+          : 'The server could not be reached; try again.',
+      );
     } finally {
       this.busy.set(false);
     }

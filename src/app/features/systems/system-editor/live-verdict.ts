@@ -98,8 +98,8 @@ export class LiveVerdict {
     const span = durationWords(answer.reachedS);
     const seconds = (answer.wallMs / 1000).toFixed(2);
     const early = answer.stoppedByBudget ? ', stopped early to stay quick' : '';
-    const scope = this.whole() ? 'Whole run' : 'Live check';
-    return `${scope}: first ${span} simulated in ${seconds} s${early}.`;
+    const scope = this.whole() ? 'Whole run:' : 'Live check of the first';
+    return `${scope} ${span} simulated in ${seconds} s${early}.`;
   });
   protected readonly fullDuration = computed(() => durationWords(this.fullDurationS()));
 }

@@ -24,6 +24,7 @@ import { EditorSection } from './editor-section';
       <div class="row" formGroupName="run">
         <tw-quantity-input
           formControlName="duration"
+          unit="h"
           label="Simulated time"
           dimension="time"
           [system]="state.units()"
