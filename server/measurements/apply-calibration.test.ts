@@ -10,7 +10,10 @@ function example(): Scenario {
 
 const calibration = {
   calibrationId: '00000000-0000-4000-8000-000000000001',
-  beds: [{ bed: 'bed-a', primingCoefficient: 0.55, dischargeLossMultiplier: 1.6 }, { bed: 'gone', primingCoefficient: 0.9 }],
+  beds: [
+    { bed: 'bed-a', primingCoefficient: 0.55, dischargeLossMultiplier: 1.6 },
+    { bed: 'gone', primingCoefficient: 0.9 },
+  ],
   pumps: [{ pump: 'pump', flowScale: 0.85 }],
   appliedAt: '2024-06-01T10:00:00.000Z',
   appliedBy: { id: '00000000-0000-4000-8000-000000000002', name: 'Cal' },
@@ -21,7 +24,11 @@ describe('applyCalibration', () => {
     const scenario = example();
     const calibrated = applyCalibration(scenario, calibration);
     const bed = calibrated.vessels.find((v) => v.id === 'bed-a');
-    expect(bed?.kind === 'bed' && bed.drain.type === 'bell-siphon' ? [bed.drain.primingCoefficient, bed.drain.dischargeLossMultiplier] : null).toEqual([0.55, 1.6]);
+    expect(
+      bed?.kind === 'bed' && bed.drain.type === 'bell-siphon'
+        ? [bed.drain.primingCoefficient, bed.drain.dischargeLossMultiplier]
+        : null,
+    ).toEqual([0.55, 1.6]);
     expect(calibrated.pumps[0]?.flowScale).toBe(0.85);
     const original = scenario.vessels.find((v) => v.id === 'bed-a');
     expect(original?.kind === 'bed' && original.drain.dischargeLossMultiplier).toBe(1);

@@ -1,5 +1,8 @@
 /** Puts a system's applied calibration onto its scenario before a run. */
-import { SystemCalibrationSchema, type SystemCalibration } from '../../shared/contracts/measurements';
+import {
+  SystemCalibrationSchema,
+  type SystemCalibration,
+} from '../../shared/contracts/measurements';
 import type { Scenario } from '../../shared/scenario/index';
 import { withCoefficients, type CoefficientValue } from './with-coefficients';
 
@@ -7,10 +10,17 @@ import { withCoefficients, type CoefficientValue } from './with-coefficients';
 export function calibrationValues(calibration: SystemCalibration): CoefficientValue[] {
   const values: CoefficientValue[] = [];
   for (const bed of calibration.beds) {
-    if (bed.primingCoefficient !== undefined) values.push({ key: 'primingCoefficient', target: bed.bed, value: bed.primingCoefficient });
-    if (bed.dischargeLossMultiplier !== undefined) values.push({ key: 'dischargeLossMultiplier', target: bed.bed, value: bed.dischargeLossMultiplier });
+    if (bed.primingCoefficient !== undefined)
+      values.push({ key: 'primingCoefficient', target: bed.bed, value: bed.primingCoefficient });
+    if (bed.dischargeLossMultiplier !== undefined)
+      values.push({
+        key: 'dischargeLossMultiplier',
+        target: bed.bed,
+        value: bed.dischargeLossMultiplier,
+      });
   }
-  for (const pump of calibration.pumps) values.push({ key: 'flowScale', target: pump.pump, value: pump.flowScale });
+  for (const pump of calibration.pumps)
+    values.push({ key: 'flowScale', target: pump.pump, value: pump.flowScale });
   return values;
 }
 

@@ -12,15 +12,27 @@ export interface CalibrationRow {
 /** Stores one fit (not applied). */
 export async function insertCalibration(
   db: Database,
-  values: { systemId: string; createdBy: string; measurementIds: string[]; parameters: unknown; fit: unknown },
+  values: {
+    systemId: string;
+    createdBy: string;
+    measurementIds: string[];
+    parameters: unknown;
+    fit: unknown;
+  },
 ): Promise<string> {
-  const [row] = await db.insert(calibrations).values({ ...values, applied: false }).returning({ id: calibrations.id });
+  const [row] = await db
+    .insert(calibrations)
+    .values({ ...values, applied: false })
+    .returning({ id: calibrations.id });
   if (!row) throw new Error('Inserting a calibration returned no row.');
   return row.id;
 }
 
 /** The fits of a system, newest first. */
-export async function listCalibrationRows(db: Database, systemId: string): Promise<CalibrationRow[]> {
+export async function listCalibrationRows(
+  db: Database,
+  systemId: string,
+): Promise<CalibrationRow[]> {
   return db
     .select({ row: calibrations, createdByName: users.name })
     .from(calibrations)
@@ -30,7 +42,10 @@ export async function listCalibrationRows(db: Database, systemId: string): Promi
 }
 
 /** One fit, or undefined. */
-export async function findCalibrationRow(db: Database, id: string): Promise<CalibrationRow | undefined> {
+export async function findCalibrationRow(
+  db: Database,
+  id: string,
+): Promise<CalibrationRow | undefined> {
   const [row] = await db
     .select({ row: calibrations, createdByName: users.name })
     .from(calibrations)
@@ -44,10 +59,22 @@ export async function findCalibrationRow(db: Database, id: string): Promise<Cali
  * clearing), in one transaction so the flag and the values never disagree. The system's version
  * is not bumped: its scenario did not change, and an open editor should still save.
  */
-export async function setSystemCalibration(db: Database, systemId: string, calibration: unknown, appliedId: string | null): Promise<void> {
+export async function setSystemCalibration(
+  db: Database,
+  systemId: string,
+  calibration: unknown,
+  appliedId: string | null,
+): Promise<void> {
   await db.transaction(async (tx) => {
-    await tx.update(systems).set({ calibration: calibration ?? null, updatedAt: sql`now()` }).where(eq(systems.id, systemId));
-    await tx.update(calibrations).set({ applied: false }).where(and(eq(calibrations.systemId, systemId), eq(calibrations.applied, true)));
-    if (appliedId) await tx.update(calibrations).set({ applied: true }).where(eq(calibrations.id, appliedId));
+    await tx
+      .update(systems)
+      .set({ calibration: calibration ?? null, updatedAt: sql`now()` })
+      .where(eq(systems.id, systemId));
+    await tx
+      .update(calibrations)
+      .set({ applied: false })
+      .where(and(eq(calibrations.systemId, systemId), eq(calibrations.applied, true)));
+    if (appliedId)
+      await tx.update(calibrations).set({ applied: true }).where(eq(calibrations.id, appliedId));
   });
 }

@@ -4,8 +4,22 @@ import { cycleFigures } from './cycle-figures';
 
 describe('compareFigures', () => {
   it('gives simulated minus measured and the relative difference, null where a side is missing', () => {
-    const measured = { cycles: 3, periodS: 400, floodS: 300, drainS: 100, highLevelM: 0.26, lowLevelM: null };
-    const simulated = { cycles: 5, periodS: 380, floodS: 290, drainS: 90, highLevelM: 0.265, lowLevelM: 0.025 };
+    const measured = {
+      cycles: 3,
+      periodS: 400,
+      floodS: 300,
+      drainS: 100,
+      highLevelM: 0.26,
+      lowLevelM: null,
+    };
+    const simulated = {
+      cycles: 5,
+      periodS: 380,
+      floodS: 290,
+      drainS: 90,
+      highLevelM: 0.265,
+      lowLevelM: 0.025,
+    };
     const rows = compareFigures(measured, simulated);
     expect(rows.map((r) => [r.metric, r.difference])).toEqual([
       ['period', -20],
@@ -15,7 +29,14 @@ describe('compareFigures', () => {
       ['low', null],
     ]);
     expect(rows[0]?.relative).toBeCloseTo(-0.05, 12);
-    expect(rows[4]).toEqual({ metric: 'low', unit: 'm', measured: null, simulated: 0.025, difference: null, relative: null });
+    expect(rows[4]).toEqual({
+      metric: 'low',
+      unit: 'm',
+      measured: null,
+      simulated: 0.025,
+      difference: null,
+      relative: null,
+    });
   });
 
   it('summarises drain cycles: flood from break to next prime, drain from prime to break', () => {
@@ -23,6 +44,13 @@ describe('compareFigures', () => {
       { primeS: 100, breakS: 160, highM: 0.26, lowM: 0.02 },
       { primeS: 500, breakS: 570, highM: 0.27, lowM: 0.03 },
     ]);
-    expect(figures).toEqual({ cycles: 2, periodS: 400, floodS: 340, drainS: 65, highLevelM: 0.265, lowLevelM: 0.025 });
+    expect(figures).toEqual({
+      cycles: 2,
+      periodS: 400,
+      floodS: 340,
+      drainS: 65,
+      highLevelM: 0.265,
+      lowLevelM: 0.025,
+    });
   });
 });

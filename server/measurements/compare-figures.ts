@@ -1,7 +1,11 @@
 /** Measured against simulated cycle figures, row by row. */
 import type { ComparisonRow, CycleFigures } from '../../shared/contracts/measurements';
 
-const ROWS: readonly { metric: ComparisonRow['metric']; unit: ComparisonRow['unit']; pick: (f: CycleFigures) => number | null }[] = [
+const ROWS: readonly {
+  metric: ComparisonRow['metric'];
+  unit: ComparisonRow['unit'];
+  pick: (f: CycleFigures) => number | null;
+}[] = [
   { metric: 'period', unit: 's', pick: (f) => f.periodS },
   { metric: 'flood', unit: 's', pick: (f) => f.floodS },
   { metric: 'drain', unit: 's', pick: (f) => f.drainS },
@@ -15,6 +19,13 @@ export function compareFigures(measured: CycleFigures, simulated: CycleFigures):
     const m = pick(measured);
     const s = pick(simulated);
     const difference = m === null || s === null ? null : s - m;
-    return { metric, unit, measured: m, simulated: s, difference, relative: difference === null || !m ? null : difference / m };
+    return {
+      metric,
+      unit,
+      measured: m,
+      simulated: s,
+      difference,
+      relative: difference === null || !m ? null : difference / m,
+    };
   });
 }

@@ -1,5 +1,9 @@
 /** `GET /api/measurements/:mid/compare?run=`: a measurement against a run of the same system, ready to overlay. */
-import { StopwatchEntrySchema, type CycleFigures, type MeasurementComparison } from '../../shared/contracts/measurements';
+import {
+  StopwatchEntrySchema,
+  type CycleFigures,
+  type MeasurementComparison,
+} from '../../shared/contracts/measurements';
 import type { User } from '../../shared/contracts/auth';
 import type { Database } from '../db/database';
 import { badRequest, HttpError } from '../http/http-error';
@@ -38,7 +42,12 @@ function interpolator(t: Float64Array, values: Float64Array): (timeS: number) =>
 
 async function runSeriesOrThrow(db: Database, runId: string): Promise<DecodedSeries> {
   const stored = await findRunSeries(db, runId);
-  if (!stored?.series) throw new HttpError(409, 'RUN_HAS_NO_SERIES', 'This run has no time series yet; wait for it to finish or run the system again.');
+  if (!stored?.series)
+    throw new HttpError(
+      409,
+      'RUN_HAS_NO_SERIES',
+      'This run has no time series yet; wait for it to finish or run the system again.',
+    );
   return decodeSeries(stored.series);
 }
 
@@ -56,24 +65,36 @@ export async function compareMeasurement(
 ): Promise<MeasurementComparison> {
   const { head } = await requireMeasurement(db, user, measurementId, 'read');
   const run = await requireRun(db, user, query.run, 'read');
-  if (run.systemId !== head.systemId) throw badRequest('Compare with a run of the same system.', [{ path: 'run', message: 'A run of another system.' }]);
+  if (run.systemId !== head.systemId)
+    throw badRequest('Compare with a run of the same system.', [
+      { path: 'run', message: 'A run of another system.' },
+    ]);
   const series = await runSeriesOrThrow(db, run.id);
   const measured = head.kind === 'stopwatch' ? null : await loadMeasuredSeries(db, measurementId);
-  const entries = head.kind === 'stopwatch' ? StopwatchEntrySchema.array().parse(head.stopwatch) : [];
+  const entries =
+    head.kind === 'stopwatch' ? StopwatchEntrySchema.array().parse(head.stopwatch) : [];
   const beds = measured ? measured.beds.map((b) => b.bed) : [...new Set(entries.map((e) => e.bed))];
   const simulatedBeds = beds.filter((b) => series.channels.some((c) => c.id === `level:${b}`));
   const bed = query.bed ?? simulatedBeds[0] ?? beds[0];
   const channel = series.channels.find((c) => c.id === `level:${bed}`);
   if (!bed || !channel || !beds.includes(bed)) {
-    throw badRequest(`Choose a vessel that is both measured and simulated: ${simulatedBeds.join(', ') || 'none'}.`, [{ path: 'bed', message: 'Not measured or not in this run.' }]);
+    throw badRequest(
+      `Choose a vessel that is both measured and simulated: ${simulatedBeds.join(', ') || 'none'}.`,
+      [{ path: 'bed', message: 'Not measured or not in this run.' }],
+    );
   }
   const events = (Array.isArray(run.events) ? run.events : []) as CycleEvent[];
-  const simCycles = steady(simulatedDrainCycles(events, bed, interpolator(series.t_s, channel.values)));
+  const simCycles = steady(
+    simulatedDrainCycles(events, bed, interpolator(series.t_s, channel.values)),
+  );
   const bedSeries = measured?.beds.find((b) => b.bed === bed);
   const measuredCycles = bedSeries ? detectLevelCycles(bedSeries.t_s, bedSeries.level_m) : [];
-  const measuredFigures: CycleFigures = bedSeries ? cycleFigures(measuredCycles) : figuresFromSpreads(stopwatchSpreads(entries, bed));
+  const measuredFigures: CycleFigures = bedSeries
+    ? cycleFigures(measuredCycles)
+    : figuresFromSpreads(stopwatchSpreads(entries, bed));
   const simulatedFigures = cycleFigures(simCycles);
-  const offsetS = measuredCycles[0] && simCycles[0] ? simCycles[0].primeS - measuredCycles[0].primeS : 0;
+  const offsetS =
+    measuredCycles[0] && simCycles[0] ? simCycles[0].primeS - measuredCycles[0].primeS : 0;
   const endS = series.t_s[series.t_s.length - 1] ?? 0;
   const keepSim = stride(series.t_s.length, query.maxPoints);
   return {
@@ -86,13 +107,23 @@ export async function compareMeasurement(
     simulated: simulatedFigures,
     rows: compareFigures(measuredFigures, simulatedFigures),
     measuredSeries: bedSeries ? shiftedSeries(bedSeries, offsetS, endS, query.maxPoints) : null,
-    simulatedSeries: { t_s: keepSim.map((i) => series.t_s[i] ?? 0), level_m: keepSim.map((i) => channel.values[i] ?? Number.NaN) },
+    simulatedSeries: {
+      t_s: keepSim.map((i) => series.t_s[i] ?? 0),
+      level_m: keepSim.map((i) => channel.values[i] ?? Number.NaN),
+    },
   };
 }
 
 /** The measured samples on the run's clock, inside the run's span, thinned. */
-function shiftedSeries(series: { t_s: number[]; level_m: number[] }, offsetS: number, endS: number, maxPoints: number): { t_s: number[]; level_m: number[] } {
-  const inside = series.t_s.map((t, i) => ({ t: t + offsetS, y: series.level_m[i] ?? 0 })).filter((p) => p.t >= 0 && p.t <= endS);
+function shiftedSeries(
+  series: { t_s: number[]; level_m: number[] },
+  offsetS: number,
+  endS: number,
+  maxPoints: number,
+): { t_s: number[]; level_m: number[] } {
+  const inside = series.t_s
+    .map((t, i) => ({ t: t + offsetS, y: series.level_m[i] ?? 0 }))
+    .filter((p) => p.t >= 0 && p.t <= endS);
   const keep = stride(inside.length, maxPoints);
   return { t_s: keep.map((i) => inside[i]?.t ?? 0), level_m: keep.map((i) => inside[i]?.y ?? 0) };
 }

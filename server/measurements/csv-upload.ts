@@ -16,17 +16,37 @@ const MAX_MB = MEASUREMENT_MAX_FILE_BYTES / (1024 * 1024);
 
 const parser = multer({
   storage: multer.memoryStorage(),
-  limits: { fileSize: MEASUREMENT_MAX_FILE_BYTES, files: 1, fields: 4, fieldSize: 64 * 1024, parts: 6 },
+  limits: {
+    fileSize: MEASUREMENT_MAX_FILE_BYTES,
+    files: 1,
+    fields: 4,
+    fieldSize: 64 * 1024,
+    parts: 6,
+  },
   fileFilter: (_req, file, accept) => {
     if (ALLOWED_EXTENSIONS.test(file.originalname)) return accept(null, true);
-    accept(new HttpError(415, 'UNSUPPORTED_FILE_TYPE', `"${file.originalname}" is not a CSV; upload a .csv, .tsv or .txt file (save spreadsheets as CSV first).`));
+    accept(
+      new HttpError(
+        415,
+        'UNSUPPORTED_FILE_TYPE',
+        `"${file.originalname}" is not a CSV; upload a .csv, .tsv or .txt file (save spreadsheets as CSV first).`,
+      ),
+    );
   },
 }).single('file');
 
 const MULTER_MESSAGES: Record<string, [number, string, string]> = {
-  LIMIT_FILE_SIZE: [413, 'FILE_TOO_LARGE', `The file is larger than ${MAX_MB} MB; split the log into parts or log less often.`],
+  LIMIT_FILE_SIZE: [
+    413,
+    'FILE_TOO_LARGE',
+    `The file is larger than ${MAX_MB} MB; split the log into parts or log less often.`,
+  ],
   LIMIT_FILE_COUNT: [400, 'ONE_FILE_ONLY', 'Upload one file at a time.'],
-  LIMIT_UNEXPECTED_FILE: [400, 'UNEXPECTED_FILE_FIELD', 'Send the CSV in a form field named "file".'],
+  LIMIT_UNEXPECTED_FILE: [
+    400,
+    'UNEXPECTED_FILE_FIELD',
+    'Send the CSV in a form field named "file".',
+  ],
 };
 
 /** Runs multer for multipart requests only, turning its errors into HttpErrors that say what to do. */
@@ -34,7 +54,11 @@ export const receiveCsvUpload: RequestHandler = (req, res, next) => {
   if (!req.is('multipart/form-data')) return next();
   parser(req, res, (error: unknown) => {
     if (error instanceof multer.MulterError) {
-      const [status, code, message] = MULTER_MESSAGES[error.code] ?? [400, 'UPLOAD_FAILED', `The upload could not be read (${error.message}).`];
+      const [status, code, message] = MULTER_MESSAGES[error.code] ?? [
+        400,
+        'UPLOAD_FAILED',
+        `The upload could not be read (${error.message}).`,
+      ];
       return next(new HttpError(status, code, message));
     }
     next(error);
@@ -53,7 +77,9 @@ function parseOptionsField(value: unknown): unknown {
   try {
     return JSON.parse(value);
   } catch {
-    throw badRequest('The options part is not valid JSON.', [{ path: 'options', message: 'Send the options as JSON.' }]);
+    throw badRequest('The options part is not valid JSON.', [
+      { path: 'options', message: 'Send the options as JSON.' },
+    ]);
   }
 }
 
@@ -61,11 +87,20 @@ function parseOptionsField(value: unknown): unknown {
 export function readCsvUpload(req: Request): { file: UploadedFile; options: unknown } {
   if (req.file) {
     const body = (req.body ?? {}) as Record<string, unknown>;
-    return { file: { bytes: req.file.buffer, filename: req.file.originalname }, options: parseOptionsField(body['options']) };
+    return {
+      file: { bytes: req.file.buffer, filename: req.file.originalname },
+      options: parseOptionsField(body['options']),
+    };
   }
   if (req.is('application/json')) {
     const pasted = parseOr400(PastedCsvSchema, req.body);
-    return { file: { bytes: Buffer.from(pasted.text, 'utf8'), filename: pasted.fileName ?? 'pasted.csv' }, options: parseOptionsField(pasted.options) };
+    return {
+      file: { bytes: Buffer.from(pasted.text, 'utf8'), filename: pasted.fileName ?? 'pasted.csv' },
+      options: parseOptionsField(pasted.options),
+    };
   }
-  throw badRequest('Attach the CSV as a multipart field named "file", or send JSON {text, options}.', [{ path: 'file', message: 'Required.' }]);
+  throw badRequest(
+    'Attach the CSV as a multipart field named "file", or send JSON {text, options}.',
+    [{ path: 'file', message: 'Required.' }],
+  );
 }

@@ -21,7 +21,8 @@ export function spreadOf(all: readonly number[]): Spread | null {
   const values = all.filter(Number.isFinite);
   if (values.length === 0) return null;
   const mean = values.reduce((a, b) => a + b, 0) / values.length;
-  const variance = values.length > 1 ? values.reduce((a, v) => a + (v - mean) ** 2, 0) / (values.length - 1) : 0;
+  const variance =
+    values.length > 1 ? values.reduce((a, v) => a + (v - mean) ** 2, 0) / (values.length - 1) : 0;
   return { mean, sd: Math.sqrt(variance), count: values.length };
 }
 

@@ -1,7 +1,9 @@
 /** Turns an uploaded file's bytes into text, refusing binary files with a message that says why. */
 
 /** The decoded text, or a stable code and a message saying what to do. */
-export type DecodedText = { ok: true; text: string; encoding: 'utf-8' | 'utf-16le' | 'windows-1252' } | { ok: false; code: string; message: string };
+export type DecodedText =
+  | { ok: true; text: string; encoding: 'utf-8' | 'utf-16le' | 'windows-1252' }
+  | { ok: false; code: string; message: string };
 
 const SIGNATURES: readonly { bytes: readonly number[]; what: string }[] = [
   { bytes: [0x50, 0x4b, 0x03, 0x04], what: 'a spreadsheet (.xlsx/.ods) or another zip archive' },
@@ -39,12 +41,19 @@ const NOT_TEXT = (what: string): DecodedText => ({
  * are refused as `NOT_A_CSV`; an empty file is `EMPTY_FILE`.
  */
 export function decodeTextFile(bytes: Uint8Array): DecodedText {
-  if (bytes.length === 0) return { ok: false, code: 'EMPTY_FILE', message: 'The file is empty; choose the CSV your logger wrote.' };
+  if (bytes.length === 0)
+    return {
+      ok: false,
+      code: 'EMPTY_FILE',
+      message: 'The file is empty; choose the CSV your logger wrote.',
+    };
   const signature = SIGNATURES.find((s) => startsWith(bytes, s.bytes));
   if (signature) return NOT_TEXT(signature.what);
   if (startsWith(bytes, [0xff, 0xfe])) {
     const text = new TextDecoder('utf-16le').decode(bytes.subarray(2));
-    return controlShare(text) > 0.001 ? NOT_TEXT('binary data') : { ok: true, text, encoding: 'utf-16le' };
+    return controlShare(text) > 0.001
+      ? NOT_TEXT('binary data')
+      : { ok: true, text, encoding: 'utf-16le' };
   }
   if (bytes.includes(0)) return NOT_TEXT('binary data (it contains NUL bytes)');
   let text: string;

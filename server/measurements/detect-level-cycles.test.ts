@@ -24,7 +24,12 @@ function sawtooth(timeS: number, offsetS: number): number {
   return 0.262 - (0.237 * (phase - 320)) / 60;
 }
 
-function sample(stepS: number, durationS: number, noiseM: number, offsetS = 37): { t: number[]; y: number[] } {
+function sample(
+  stepS: number,
+  durationS: number,
+  noiseM: number,
+  offsetS = 37,
+): { t: number[]; y: number[] } {
   const noise = gaussian(7);
   const t: number[] = [];
   const y: number[] = [];
@@ -41,8 +46,8 @@ describe('detectLevelCycles', () => {
     const cycles = detectLevelCycles(t, y);
     expect(cycles.length).toBeGreaterThanOrEqual(5);
     for (const c of cycles) {
-      const primeError = ((c.primeS - 37 - 320) % 380 + 570) % 380 - 190;
-      const breakError = ((c.breakS - 37 - 380) % 380 + 570) % 380 - 190;
+      const primeError = ((((c.primeS - 37 - 320) % 380) + 570) % 380) - 190;
+      const breakError = ((((c.breakS - 37 - 380) % 380) + 570) % 380) - 190;
       expect(Math.abs(primeError)).toBeLessThan(0.05);
       expect(Math.abs(breakError)).toBeLessThan(0.05);
       expect(c.highM).toBeCloseTo(0.262, 4);
@@ -73,6 +78,11 @@ describe('detectLevelCycles', () => {
   it('finds no cycle in a flat or too short series', () => {
     expect(detectLevelCycles([0, 1, 2], [0.1, 0.2, 0.1])).toEqual([]);
     const flat = sample(2, 1000, 0.0005);
-    expect(detectLevelCycles(flat.t, flat.t.map((_, i) => 0.2 + (flat.y[i]! - sawtooth(flat.t[i]!, 37))))).toEqual([]);
+    expect(
+      detectLevelCycles(
+        flat.t,
+        flat.t.map((_, i) => 0.2 + (flat.y[i]! - sawtooth(flat.t[i]!, 37))),
+      ),
+    ).toEqual([]);
   });
 });

@@ -29,7 +29,11 @@ function quantile(sorted: readonly number[], q: number): number {
 }
 
 /** Index ranges [from, to) of the series above `hi` entered from below `lo` and left below `lo`. */
-function highExcursions(s: readonly number[], lo: number, hi: number): { from: number; to: number }[] {
+function highExcursions(
+  s: readonly number[],
+  lo: number,
+  hi: number,
+): { from: number; to: number }[] {
   const out: { from: number; to: number }[] = [];
   let state: 'low' | 'high' | 'unknown' = 'unknown';
   let from = -1;
@@ -60,18 +64,32 @@ type SideFilter = (value: number) => boolean;
  * near index `center` (within [lower, upper)); the level is read on the `keep` side's line.
  */
 function refineKnee(
-  t: readonly number[], y: readonly number[], center: number, lower: number, upper: number,
-  leftOk: SideFilter, rightOk: SideFilter, keep: 'left' | 'right',
+  t: readonly number[],
+  y: readonly number[],
+  center: number,
+  lower: number,
+  upper: number,
+  leftOk: SideFilter,
+  rightOk: SideFilter,
+  keep: 'left' | 'right',
 ): { timeS: number; levelM: number } {
   let tk = t[center] ?? 0;
   let level = y[center] ?? 0;
   for (let iteration = 0; iteration < 4; iteration++) {
     const left: number[] = [];
-    for (let i = upper - 1; i >= lower && left.length < KNEE_SAMPLES; i--) if ((t[i] ?? 0) < tk && leftOk(y[i] ?? 0)) left.unshift(i);
+    for (let i = upper - 1; i >= lower && left.length < KNEE_SAMPLES; i--)
+      if ((t[i] ?? 0) < tk && leftOk(y[i] ?? 0)) left.unshift(i);
     const right: number[] = [];
-    for (let i = lower; i < upper && right.length < KNEE_SAMPLES; i++) if ((t[i] ?? 0) > tk && rightOk(y[i] ?? 0)) right.push(i);
-    const l = fitLine(left.map((i) => t[i] ?? 0), left.map((i) => y[i] ?? 0));
-    const r = fitLine(right.map((i) => t[i] ?? 0), right.map((i) => y[i] ?? 0));
+    for (let i = lower; i < upper && right.length < KNEE_SAMPLES; i++)
+      if ((t[i] ?? 0) > tk && rightOk(y[i] ?? 0)) right.push(i);
+    const l = fitLine(
+      left.map((i) => t[i] ?? 0),
+      left.map((i) => y[i] ?? 0),
+    );
+    const r = fitLine(
+      right.map((i) => t[i] ?? 0),
+      right.map((i) => y[i] ?? 0),
+    );
     if (!l || !r || l.slope === r.slope) break;
     const crossing = (r.intercept - l.intercept) / (l.slope - r.slope);
     const lo = t[left.at(-1) ?? 0] ?? tk;
@@ -105,9 +123,32 @@ export function detectLevelCycles(t: readonly number[], level: readonly number[]
     const peakS = s[peak] ?? 0;
     const troughS = s[trough] ?? 0;
     const middle = troughS + 0.5 * (peakS - troughS);
-    const prime = refineKnee(t, level, peak, previousEnd, trough, () => true, (v) => v > middle, 'left');
-    const broke = refineKnee(t, level, trough, peak, next.from + 1, (v) => v < middle, () => true, 'right');
-    cycles.push({ primeS: prime.timeS, breakS: broke.timeS, highM: prime.levelM, lowM: broke.levelM });
+    const prime = refineKnee(
+      t,
+      level,
+      peak,
+      previousEnd,
+      trough,
+      () => true,
+      (v) => v > middle,
+      'left',
+    );
+    const broke = refineKnee(
+      t,
+      level,
+      trough,
+      peak,
+      next.from + 1,
+      (v) => v < middle,
+      () => true,
+      'right',
+    );
+    cycles.push({
+      primeS: prime.timeS,
+      breakS: broke.timeS,
+      highM: prime.levelM,
+      lowM: broke.levelM,
+    });
   }
   return cycles;
 }

@@ -20,7 +20,10 @@ describe('detectTimeFormat', () => {
   });
 
   it('says why when nothing fits', () => {
-    expect(detectTimeFormat(['', ' '])).toEqual({ format: null, reason: 'the time column is empty' });
+    expect(detectTimeFormat(['', ' '])).toEqual({
+      format: null,
+      reason: 'the time column is empty',
+    });
     expect(detectTimeFormat(['Tuesday noon']).format).toBeNull();
   });
 });

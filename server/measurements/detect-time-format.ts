@@ -28,7 +28,8 @@ function detectOrdered(samples: readonly string[]): DetectedTimeFormat {
   if (secondOver12 && !firstOver12) return { format: 'mdy' };
   return {
     format: null,
-    reason: 'the dates could be day/month/year or month/day/year (no day above 12 yet); choose the format',
+    reason:
+      'the dates could be day/month/year or month/day/year (no day above 12 yet); choose the format',
   };
 }
 
@@ -38,7 +39,10 @@ function detectOrdered(samples: readonly string[]): DetectedTimeFormat {
  * or milliseconds (by magnitude), or seconds / `h:mm:ss` since the start.
  */
 export function detectTimeFormat(values: readonly string[]): DetectedTimeFormat {
-  const samples = values.map((v) => v.trim()).filter((v) => v !== '').slice(0, 500);
+  const samples = values
+    .map((v) => v.trim())
+    .filter((v) => v !== '')
+    .slice(0, 500);
   const first = samples[0];
   if (first === undefined) return { format: null, reason: 'the time column is empty' };
   if (ISO_START.test(first)) return { format: 'iso' };

@@ -23,7 +23,12 @@ describe('guessImportOptions', () => {
       rows: [['0', 'bed-a', '0.21']],
       decimal: '.',
     });
-    expect(guess.level).toEqual({ kind: 'distance', column: 'distance', unit: 'm', mountingHeight: '0.5 m' });
+    expect(guess.level).toEqual({
+      kind: 'distance',
+      column: 'distance',
+      unit: 'm',
+      mountingHeight: '0.5 m',
+    });
     expect(guess.bedColumn).toBe('bed');
   });
 
@@ -34,11 +39,21 @@ describe('guessImportOptions', () => {
       decimal: ',',
     });
     expect(guess.time.column).toBe('Zeit');
-    expect(guess.level).toEqual({ kind: 'pressure', column: 'Druck (hPa)', unit: 'hPa', reference: 'absolute', barometricColumn: 'Baro (hPa)' });
+    expect(guess.level).toEqual({
+      kind: 'pressure',
+      column: 'Druck (hPa)',
+      unit: 'hPa',
+      reference: 'absolute',
+      barometricColumn: 'Baro (hPa)',
+    });
   });
 
   it('falls back to the first numeric column after the time', () => {
-    const guess = guessImportOptions({ columns: ['when', 'a', 'b'], rows: [['x', 'n/a', '4.5']], decimal: '.' });
+    const guess = guessImportOptions({
+      columns: ['when', 'a', 'b'],
+      rows: [['x', 'n/a', '4.5']],
+      decimal: '.',
+    });
     expect(guess.level).toMatchObject({ kind: 'level', column: 'b', unit: 'mm' });
   });
 });

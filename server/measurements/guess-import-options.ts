@@ -1,5 +1,9 @@
 /** First guesses for the import options of a CSV, from its header and first rows (for the preview). */
-import type { CsvImportOptionsInput, LengthUnit, PressureUnit } from '../../shared/contracts/measurements';
+import type {
+  CsvImportOptionsInput,
+  LengthUnit,
+  PressureUnit,
+} from '../../shared/contracts/measurements';
 import { readNumberCell } from './level-reader';
 
 /** What the guess looks at. */
@@ -18,7 +22,11 @@ const LEVEL_WORDS = /level|depth|height|stage|water|pegel|niveau|nivel|h_/i;
 const BED_WORDS = /^(bed|vessel|tank|bed_id|vessel_id|where)$/i;
 const BARO_WORDS = /baro|atm|air/i;
 
-function findColumn(columns: readonly string[], pattern: RegExp, exclude: readonly number[] = []): number {
+function findColumn(
+  columns: readonly string[],
+  pattern: RegExp,
+  exclude: readonly number[] = [],
+): number {
   return columns.findIndex((c, i) => !exclude.includes(i) && pattern.test(c));
 }
 
@@ -36,21 +44,46 @@ function lengthUnitFromValues(values: readonly (number | null)[]): LengthUnit {
 
 function levelSource(input: GuessInput, exclude: number[]): CsvImportOptionsInput['level'] {
   const { columns, rows, decimal } = input;
-  const numericColumn = columns.findIndex((_, i) => !exclude.includes(i) && rows.some((r) => readNumberCell(r[i], decimal) !== null));
+  const numericColumn = columns.findIndex(
+    (_, i) => !exclude.includes(i) && rows.some((r) => readNumberCell(r[i], decimal) !== null),
+  );
   const pressure = findColumn(columns, PRESSURE_WORDS, exclude);
   if (pressure >= 0) {
     const header = columns[pressure] ?? '';
-    const unit = unitFromHeader<PressureUnit>(header, ['kPa', 'hPa', 'mbar', 'bar', 'psi', 'Pa', 'cmH2O', 'inH2O']) ?? 'kPa';
+    const unit =
+      unitFromHeader<PressureUnit>(header, [
+        'kPa',
+        'hPa',
+        'mbar',
+        'bar',
+        'psi',
+        'Pa',
+        'cmH2O',
+        'inH2O',
+      ]) ?? 'kPa';
     const baro = findColumn(columns, BARO_WORDS, [...exclude, pressure]);
     return baro >= 0
-      ? { kind: 'pressure', column: header, unit, reference: 'absolute', barometricColumn: columns[baro] ?? '' }
+      ? {
+          kind: 'pressure',
+          column: header,
+          unit,
+          reference: 'absolute',
+          barometricColumn: columns[baro] ?? '',
+        }
       : { kind: 'pressure', column: header, unit, reference: 'gauge' };
   }
   const distance = findColumn(columns, DISTANCE_WORDS, exclude);
-  const level = distance >= 0 ? distance : Math.max(findColumn(columns, LEVEL_WORDS, exclude), numericColumn, 0);
+  const level =
+    distance >= 0
+      ? distance
+      : Math.max(findColumn(columns, LEVEL_WORDS, exclude), numericColumn, 0);
   const header = columns[level] ?? '';
-  const unit = unitFromHeader<LengthUnit>(header, ['mm', 'cm', 'm', 'in', 'ft']) ?? lengthUnitFromValues(rows.map((r) => readNumberCell(r[level], decimal)));
-  return distance >= 0 ? { kind: 'distance', column: header, unit, mountingHeight: '0.5 m' } : { kind: 'level', column: header, unit };
+  const unit =
+    unitFromHeader<LengthUnit>(header, ['mm', 'cm', 'm', 'in', 'ft']) ??
+    lengthUnitFromValues(rows.map((r) => readNumberCell(r[level], decimal)));
+  return distance >= 0
+    ? { kind: 'distance', column: header, unit, mountingHeight: '0.5 m' }
+    : { kind: 'level', column: header, unit };
 }
 
 /**

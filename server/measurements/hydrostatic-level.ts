@@ -11,6 +11,10 @@ export const STANDARD_GRAVITY_M_PER_S2 = 9.80665;
  * Valid for still water (the bed's surface moves slowly next to the pressure wave speed) and
  * constant density over the column.
  */
-export function hydrostaticLevelM(gaugePressurePa: number, densityKgPerM3: number, sensorHeightM: number): number {
+export function hydrostaticLevelM(
+  gaugePressurePa: number,
+  densityKgPerM3: number,
+  sensorHeightM: number,
+): number {
   return gaugePressurePa / (densityKgPerM3 * STANDARD_GRAVITY_M_PER_S2) + sensorHeightM;
 }

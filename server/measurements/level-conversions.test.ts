@@ -16,7 +16,10 @@ describe('level conversions', () => {
     // NIST SP 811 Appendix B.8 factors; "1 psi = 27.68 in of water" is the usual published round value.
     expect(pressureToPascals(1, 'psi') / pressureToPascals(1, 'inH2O')).toBeCloseTo(27.68, 2);
     // Water at 4 °C is 999.97 kg/m³ (Kell 1975): 1 psi ≈ 0.7031 m ≈ 2.307 ft.
-    expect(hydrostaticLevelM(pressureToPascals(1, 'psi'), 999.97, 0) / 0.3048).toBeCloseTo(2.307, 3);
+    expect(hydrostaticLevelM(pressureToPascals(1, 'psi'), 999.97, 0) / 0.3048).toBeCloseTo(
+      2.307,
+      3,
+    );
     expect(pressureToPascals(12.5, 'mbar')).toBe(1250);
     expect(pressureToPascals(1.2, 'kPa')).toBe(1200);
   });
@@ -36,7 +39,11 @@ describe('level conversions', () => {
 describe('waterDensityKgPerM3', () => {
   it('matches IAPWS-95 densities at 1 atm (Wagner & Pruss 2002) within 0.01 kg/m³', async () => {
     const { waterDensityKgPerM3 } = await import('./water-density');
-    for (const [temperatureC, density] of [[4, 999.975], [20, 998.207], [25, 997.048]] as const) {
+    for (const [temperatureC, density] of [
+      [4, 999.975],
+      [20, 998.207],
+      [25, 997.048],
+    ] as const) {
       expect(Math.abs(waterDensityKgPerM3(temperatureC) - density)).toBeLessThan(0.01);
     }
   });

@@ -26,7 +26,12 @@ export function readNumberCell(raw: string | undefined, decimal: '.' | ','): num
   return NUMBER.test(text) ? Number(text) : null;
 }
 
-function cell(fields: readonly string[], index: number, decimal: '.' | ',', what: string): { value: number } | { reason: string } {
+function cell(
+  fields: readonly string[],
+  index: number,
+  decimal: '.' | ',',
+  what: string,
+): { value: number } | { reason: string } {
   const raw = fields[index];
   if (raw === undefined || raw.trim() === '') return { reason: `${what} is empty` };
   const value = readNumberCell(raw, decimal);
@@ -49,14 +54,19 @@ export function makeLevelReader(
     const zero = source.zeroOffset ?? 0;
     return (fields) => {
       const c = cell(fields, columns.level, decimal, 'level');
-      return 'reason' in c ? { ok: false, reason: c.reason } : { ok: true, levelM: lengthToMetres(c.value, source.unit) + zero };
+      return 'reason' in c
+        ? { ok: false, reason: c.reason }
+        : { ok: true, levelM: lengthToMetres(c.value, source.unit) + zero };
     };
   }
   if (source.kind === 'distance') {
     return (fields) => {
       const c = cell(fields, columns.level, decimal, 'distance');
       if ('reason' in c) return { ok: false, reason: c.reason };
-      return { ok: true, levelM: levelFromDistanceM(source.mountingHeight, lengthToMetres(c.value, source.unit)) };
+      return {
+        ok: true,
+        levelM: levelFromDistanceM(source.mountingHeight, lengthToMetres(c.value, source.unit)),
+      };
     };
   }
   const density = densityKgPerM3(source.waterTemperatureC ?? 20);

@@ -59,25 +59,53 @@ interface Prepared {
 }
 
 /** Decodes, reads the table and settles the options (given, or guessed for a preview). */
-async function prepare(db: Database, user: User, systemId: string, file: UploadedFile, rawOptions: unknown, guess: boolean): Promise<Prepared> {
+async function prepare(
+  db: Database,
+  user: User,
+  systemId: string,
+  file: UploadedFile,
+  rawOptions: unknown,
+  guess: boolean,
+): Promise<Prepared> {
   const { system } = await requireSystemAccess(db, user, systemId, 'write');
   const { vessels, beds } = systemVessels(system.scenario);
   const text = decodeOr4xx(file);
-  let options = rawOptions === undefined ? undefined : parseOr400(CsvImportOptionsSchema, rawOptions, 'options');
+  let options =
+    rawOptions === undefined
+      ? undefined
+      : parseOr400(CsvImportOptionsSchema, rawOptions, 'options');
   const table = readCsvTable(text, options ?? { delimiter: 'auto', decimal: '.', hasHeader: true });
   if (!table.ok) throw new HttpError(400, table.code, table.message);
   if (!options) {
-    if (!guess) throw badRequest('Send the import options with the file.', [{ path: 'options', message: 'Required.' }]);
+    if (!guess)
+      throw badRequest('Send the import options with the file.', [
+        { path: 'options', message: 'Required.' },
+      ]);
     const rows = table.records.slice(0, 50).map((r) => r.fields);
-    const guessed: CsvImportOptionsInput = guessImportOptions({ columns: table.columns, rows, decimal: '.', ...(beds.length === 1 ? { onlyBed: beds[0] } : {}) });
+    const guessed: CsvImportOptionsInput = guessImportOptions({
+      columns: table.columns,
+      rows,
+      decimal: '.',
+      ...(beds.length === 1 ? { onlyBed: beds[0] } : {}),
+    });
     options = CsvImportOptionsSchema.parse(guessed);
   }
-  const context: LevelCsvContext = { vessels, ...(beds.length === 1 && beds[0] ? { defaultVessel: beds[0] } : {}), densityKgPerM3: waterDensityKgPerM3 };
+  const context: LevelCsvContext = {
+    vessels,
+    ...(beds.length === 1 && beds[0] ? { defaultVessel: beds[0] } : {}),
+    densityKgPerM3: waterDensityKgPerM3,
+  };
   return { text, table, options, context };
 }
 
 /** `POST /api/systems/:id/measurements/preview`: parses without storing; problems are reported, not thrown. */
-export async function previewCsv(db: Database, user: User, systemId: string, file: UploadedFile, rawOptions: unknown): Promise<CsvPreview> {
+export async function previewCsv(
+  db: Database,
+  user: User,
+  systemId: string,
+  file: UploadedFile,
+  rawOptions: unknown,
+): Promise<CsvPreview> {
   const { table, options, context } = await prepare(db, user, systemId, file, rawOptions, true);
   const parsed = parseLevelCsv(table.columns, table.records, options, context);
   const base = {
@@ -90,7 +118,16 @@ export async function previewCsv(db: Database, user: User, systemId: string, fil
   if (!parsed.ok) {
     const rejected = parsed.rejected ?? [];
     const problem = { code: parsed.code, message: parsed.message };
-    return { ...base, timeFormat: null, rows: [], acceptedCount: 0, rejected: rejected.slice(0, 100), rejectedCount: rejected.length, beds: [], problem };
+    return {
+      ...base,
+      timeFormat: null,
+      rows: [],
+      acceptedCount: 0,
+      rejected: rejected.slice(0, 100),
+      rejectedCount: rejected.length,
+      beds: [],
+      problem,
+    };
   }
   return {
     ...base,
@@ -105,7 +142,13 @@ export async function previewCsv(db: Database, user: User, systemId: string, fil
 }
 
 /** `POST /api/systems/:id/measurements`: stores the original file and the parsed series together. */
-export async function createCsvMeasurement(db: Database, user: User, systemId: string, file: UploadedFile, rawOptions: unknown): Promise<Measurement> {
+export async function createCsvMeasurement(
+  db: Database,
+  user: User,
+  systemId: string,
+  file: UploadedFile,
+  rawOptions: unknown,
+): Promise<Measurement> {
   const { table, options, context } = await prepare(db, user, systemId, file, rawOptions, false);
   const parsed = parseLevelCsv(table.columns, table.records, options, context);
   if (!parsed.ok) throw new HttpError(400, parsed.code, parsed.message);
@@ -116,7 +159,14 @@ export async function createCsvMeasurement(db: Database, user: User, systemId: s
     name: options.name ?? file.filename.replace(/\.[^.]*$/, '').slice(0, 200) ?? 'Level log',
     originalFilename: file.filename.slice(0, 255),
     original: file.bytes,
-    options: { import: options, detected: { timeFormat: parsed.timeFormat, delimiter: table.delimiter, headerLine: table.headerLine } },
+    options: {
+      import: options,
+      detected: {
+        timeFormat: parsed.timeFormat,
+        delimiter: table.delimiter,
+        headerLine: table.headerLine,
+      },
+    },
     series: { ...parsed.series, overview: overviewOf(parsed.series) },
     rejected: { total: parsed.rejectedCount, rows: parsed.rejected },
     stopwatch: null,
@@ -125,23 +175,42 @@ export async function createCsvMeasurement(db: Database, user: User, systemId: s
 }
 
 /** `POST /api/systems/:id/measurements/stopwatch`: observed cycles per bed (s and m). */
-export async function createStopwatchMeasurement(db: Database, user: User, systemId: string, body: unknown): Promise<Measurement> {
+export async function createStopwatchMeasurement(
+  db: Database,
+  user: User,
+  systemId: string,
+  body: unknown,
+): Promise<Measurement> {
   const { system } = await requireSystemAccess(db, user, systemId, 'write');
   const request = parseOr400(CreateStopwatchRequestSchema, body);
   const { beds } = systemVessels(system.scenario);
-  const fields = request.entries.flatMap((e, i) => (beds.includes(e.bed) ? [] : [{ path: `entries[${i}].bed`, message: `"${e.bed}" is not a bed of this system; choose one of ${beds.join(', ')}.` }]));
-  if (fields.length > 0) throw badRequest('Some entries name a bed this system does not have.', fields);
-  const overview: MeasuredBedOverview[] = [...new Set(request.entries.map((e) => e.bed))].map((bed) => {
-    const mine = request.entries.filter((e) => e.bed === bed);
-    const marks = mine.flatMap((e) => [e.highMark, e.lowMark]).filter((m): m is number => m !== undefined);
-    return {
-      bed,
-      samples: mine.length,
-      durationS: mine.reduce((sum, e) => sum + e.fillTime + e.drainTime, 0),
-      minLevel_m: marks.length > 0 ? Math.min(...marks) : null,
-      maxLevel_m: marks.length > 0 ? Math.max(...marks) : null,
-    };
-  });
+  const fields = request.entries.flatMap((e, i) =>
+    beds.includes(e.bed)
+      ? []
+      : [
+          {
+            path: `entries[${i}].bed`,
+            message: `"${e.bed}" is not a bed of this system; choose one of ${beds.join(', ')}.`,
+          },
+        ],
+  );
+  if (fields.length > 0)
+    throw badRequest('Some entries name a bed this system does not have.', fields);
+  const overview: MeasuredBedOverview[] = [...new Set(request.entries.map((e) => e.bed))].map(
+    (bed) => {
+      const mine = request.entries.filter((e) => e.bed === bed);
+      const marks = mine
+        .flatMap((e) => [e.highMark, e.lowMark])
+        .filter((m): m is number => m !== undefined);
+      return {
+        bed,
+        samples: mine.length,
+        durationS: mine.reduce((sum, e) => sum + e.fillTime + e.drainTime, 0),
+        minLevel_m: marks.length > 0 ? Math.min(...marks) : null,
+        maxLevel_m: marks.length > 0 ? Math.max(...marks) : null,
+      };
+    },
+  );
   const id = await insertMeasurement(db, {
     systemId,
     createdBy: user.id,

@@ -41,7 +41,9 @@ const head = {
   kind: measurements.kind,
   name: measurements.name,
   originalFilename: measurements.originalFilename,
-  sizeBytes: sql<number | null>`octet_length(${measurements.original})`.mapWith((v: unknown) => (v === null ? null : Number(v))),
+  sizeBytes: sql<number | null>`octet_length(${measurements.original})`.mapWith((v: unknown) =>
+    v === null ? null : Number(v),
+  ),
   options: measurements.options,
   overview: sql<unknown>`${measurements.series} -> 'overview'`,
   startTime: sql<unknown>`${measurements.series} -> 'startTime'`,
@@ -60,7 +62,10 @@ export async function insertMeasurement(db: Database, values: NewMeasurement): P
 }
 
 /** The measurements of a system, newest first. */
-export async function listMeasurementHeads(db: Database, systemId: string): Promise<MeasurementHead[]> {
+export async function listMeasurementHeads(
+  db: Database,
+  systemId: string,
+): Promise<MeasurementHead[]> {
   return db
     .select(head)
     .from(measurements)
@@ -70,8 +75,15 @@ export async function listMeasurementHeads(db: Database, systemId: string): Prom
 }
 
 /** One measurement's head, or undefined. */
-export async function findMeasurementHead(db: Database, id: string): Promise<MeasurementHead | undefined> {
-  const [row] = await db.select(head).from(measurements).leftJoin(users, eq(users.id, measurements.createdBy)).where(eq(measurements.id, id));
+export async function findMeasurementHead(
+  db: Database,
+  id: string,
+): Promise<MeasurementHead | undefined> {
+  const [row] = await db
+    .select(head)
+    .from(measurements)
+    .leftJoin(users, eq(users.id, measurements.createdBy))
+    .where(eq(measurements.id, id));
   return row;
 }
 
@@ -81,7 +93,10 @@ export async function findMeasurementPart<K extends 'series' | 'rejected' | 'ori
   id: string,
   part: K,
 ): Promise<(typeof measurements.$inferSelect)[K] | undefined> {
-  const [row] = await db.select({ value: measurements[part] }).from(measurements).where(eq(measurements.id, id));
+  const [row] = await db
+    .select({ value: measurements[part] })
+    .from(measurements)
+    .where(eq(measurements.id, id));
   return row?.value as (typeof measurements.$inferSelect)[K] | undefined;
 }
 

@@ -1,6 +1,9 @@
 /** `/api/systems/:id/measurements`, `/api/measurements/:mid` and calibrations: the web layer only. */
 import { Router, type Request } from 'express';
-import { CompareQuerySchema, MeasurementSeriesQuerySchema } from '../../shared/contracts/measurements';
+import {
+  CompareQuerySchema,
+  MeasurementSeriesQuerySchema,
+} from '../../shared/contracts/measurements';
 import type { AppContext } from '../app-context';
 import { currentUser } from '../auth/session-user';
 import { requireAuth } from '../http/require-auth';
@@ -15,7 +18,11 @@ import {
 } from './calibration-service';
 import { compareMeasurement } from './comparison-service';
 import { readCsvUpload, receiveCsvUpload } from './csv-upload';
-import { createCsvMeasurement, createStopwatchMeasurement, previewCsv } from './measurement-import-service';
+import {
+  createCsvMeasurement,
+  createStopwatchMeasurement,
+  previewCsv,
+} from './measurement-import-service';
 import {
   deleteMeasurement,
   getMeasurement,
@@ -31,19 +38,39 @@ const param = (req: Request, name: string): string => String(req.params[name] ??
 export function measurementsRouter(ctx: AppContext): Router {
   const router = Router();
   const { db } = ctx;
-  router.use(['/systems/:systemId/measurements', '/systems/:systemId/calibrations', '/systems/:systemId/calibration', '/measurements', '/calibrations'], requireAuth);
+  router.use(
+    [
+      '/systems/:systemId/measurements',
+      '/systems/:systemId/calibrations',
+      '/systems/:systemId/calibration',
+      '/measurements',
+      '/calibrations',
+    ],
+    requireAuth,
+  );
 
   router.post('/systems/:systemId/measurements/preview', receiveCsvUpload, async (req, res) => {
     const { file, options } = readCsvUpload(req);
     res.json(await previewCsv(db, currentUser(req), param(req, 'systemId'), file, options));
   });
   router.post('/systems/:systemId/measurements/stopwatch', async (req, res) => {
-    const measurement = await createStopwatchMeasurement(db, currentUser(req), param(req, 'systemId'), req.body);
+    const measurement = await createStopwatchMeasurement(
+      db,
+      currentUser(req),
+      param(req, 'systemId'),
+      req.body,
+    );
     res.status(201).location(`/api/measurements/${measurement.id}`).json(measurement);
   });
   router.post('/systems/:systemId/measurements', receiveCsvUpload, async (req, res) => {
     const { file, options } = readCsvUpload(req);
-    const measurement = await createCsvMeasurement(db, currentUser(req), param(req, 'systemId'), file, options);
+    const measurement = await createCsvMeasurement(
+      db,
+      currentUser(req),
+      param(req, 'systemId'),
+      file,
+      options,
+    );
     res.status(201).location(`/api/measurements/${measurement.id}`).json(measurement);
   });
   router.get('/systems/:systemId/measurements', async (req, res) => {
@@ -54,13 +81,19 @@ export function measurementsRouter(ctx: AppContext): Router {
   });
   router.get('/measurements/:measurementId/series', async (req, res) => {
     const { maxPoints } = parseOr400(MeasurementSeriesQuerySchema, req.query);
-    res.json(await getMeasurementSeries(db, currentUser(req), param(req, 'measurementId'), maxPoints));
+    res.json(
+      await getMeasurementSeries(db, currentUser(req), param(req, 'measurementId'), maxPoints),
+    );
   });
   router.get('/measurements/:measurementId/rejected', async (req, res) => {
     res.json(await getRejectedRows(db, currentUser(req), param(req, 'measurementId')));
   });
   router.get('/measurements/:measurementId/original', async (req, res) => {
-    const { filename, bytes } = await getOriginalFile(db, currentUser(req), param(req, 'measurementId'));
+    const { filename, bytes } = await getOriginalFile(
+      db,
+      currentUser(req),
+      param(req, 'measurementId'),
+    );
     res.attachment(filename).type('application/octet-stream').send(bytes);
   });
   router.get('/measurements/:measurementId/compare', async (req, res) => {
@@ -74,7 +107,12 @@ export function measurementsRouter(ctx: AppContext): Router {
 
   const calibrationDeps = { db, runner: calibrationRunnerFor(ctx) };
   router.post('/systems/:systemId/calibrations', async (req, res) => {
-    const calibration = await startCalibration(calibrationDeps, currentUser(req), param(req, 'systemId'), req.body);
+    const calibration = await startCalibration(
+      calibrationDeps,
+      currentUser(req),
+      param(req, 'systemId'),
+      req.body,
+    );
     res.status(201).json(calibration);
   });
   router.get('/systems/:systemId/calibrations', async (req, res) => {

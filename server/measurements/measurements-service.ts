@@ -23,13 +23,17 @@ import {
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 function asRecord(value: unknown): Record<string, unknown> | null {
-  return value !== null && typeof value === 'object' && !Array.isArray(value) ? (value as Record<string, unknown>) : null;
+  return value !== null && typeof value === 'object' && !Array.isArray(value)
+    ? (value as Record<string, unknown>)
+    : null;
 }
 
 /** A stored head as the API shows it. */
 export function toMeasurement(row: MeasurementHead): Measurement {
   const overview = MeasuredBedOverviewSchema.array().safeParse(row.overview);
-  const stopwatch = Array.isArray(row.stopwatch) ? (row.stopwatch as Measurement['stopwatch']) : null;
+  const stopwatch = Array.isArray(row.stopwatch)
+    ? (row.stopwatch as Measurement['stopwatch'])
+    : null;
   return {
     id: row.id,
     systemId: row.systemId,
@@ -67,19 +71,32 @@ export async function requireMeasurement(
 }
 
 /** `GET /api/systems/:id/measurements`. */
-export async function listMeasurements(db: Database, user: User, systemId: string): Promise<MeasurementList> {
+export async function listMeasurements(
+  db: Database,
+  user: User,
+  systemId: string,
+): Promise<MeasurementList> {
   await requireSystemAccess(db, user, systemId, 'read');
   return { items: (await listMeasurementHeads(db, systemId)).map(toMeasurement) };
 }
 
 /** `GET /api/measurements/:mid`. */
-export async function getMeasurement(db: Database, user: User, measurementId: string): Promise<Measurement> {
+export async function getMeasurement(
+  db: Database,
+  user: User,
+  measurementId: string,
+): Promise<Measurement> {
   return toMeasurement((await requireMeasurement(db, user, measurementId, 'read')).head);
 }
 
 /** The stored series of a measurement (empty for a stopwatch log). */
-export async function loadMeasuredSeries(db: Database, measurementId: string): Promise<MeasuredSeries> {
-  const parsed = MeasuredSeriesSchema.safeParse(await findMeasurementPart(db, measurementId, 'series'));
+export async function loadMeasuredSeries(
+  db: Database,
+  measurementId: string,
+): Promise<MeasuredSeries> {
+  const parsed = MeasuredSeriesSchema.safeParse(
+    await findMeasurementPart(db, measurementId, 'series'),
+  );
   return parsed.success ? parsed.data : { startTime: null, beds: [] };
 }
 
@@ -90,36 +107,65 @@ function stride(n: number, maxPoints: number | undefined): number[] {
 }
 
 /** `GET /api/measurements/:mid/series`: per vessel, thinned to `maxPoints` samples when given. */
-export async function getMeasurementSeries(db: Database, user: User, measurementId: string, maxPoints: number | undefined): Promise<MeasuredSeries> {
+export async function getMeasurementSeries(
+  db: Database,
+  user: User,
+  measurementId: string,
+  maxPoints: number | undefined,
+): Promise<MeasuredSeries> {
   await requireMeasurement(db, user, measurementId, 'read');
   const series = await loadMeasuredSeries(db, measurementId);
   return {
     startTime: series.startTime,
     beds: series.beds.map((b) => {
       const keep = stride(b.t_s.length, maxPoints);
-      return { bed: b.bed, t_s: keep.map((i) => b.t_s[i] ?? 0), level_m: keep.map((i) => b.level_m[i] ?? 0) };
+      return {
+        bed: b.bed,
+        t_s: keep.map((i) => b.t_s[i] ?? 0),
+        level_m: keep.map((i) => b.level_m[i] ?? 0),
+      };
     }),
   };
 }
 
 /** `GET /api/measurements/:mid/rejected`. */
-export async function getRejectedRows(db: Database, user: User, measurementId: string): Promise<{ items: RejectedRow[]; total: number }> {
+export async function getRejectedRows(
+  db: Database,
+  user: User,
+  measurementId: string,
+): Promise<{ items: RejectedRow[]; total: number }> {
   const { head } = await requireMeasurement(db, user, measurementId, 'read');
   const stored = asRecord(await findMeasurementPart(db, measurementId, 'rejected'));
   const rows = RejectedRowSchema.array().safeParse(stored?.['rows']);
-  return { items: rows.success ? rows.data : [], total: typeof head.rejectedTotal === 'number' ? head.rejectedTotal : 0 };
+  return {
+    items: rows.success ? rows.data : [],
+    total: typeof head.rejectedTotal === 'number' ? head.rejectedTotal : 0,
+  };
 }
 
 /** `GET /api/measurements/:mid/original`: the uploaded bytes, exactly. */
-export async function getOriginalFile(db: Database, user: User, measurementId: string): Promise<{ filename: string; bytes: Buffer }> {
+export async function getOriginalFile(
+  db: Database,
+  user: User,
+  measurementId: string,
+): Promise<{ filename: string; bytes: Buffer }> {
   const { head } = await requireMeasurement(db, user, measurementId, 'read');
   const bytes = await findMeasurementPart(db, measurementId, 'original');
-  if (!bytes) throw new HttpError(404, 'NO_ORIGINAL_FILE', 'This measurement was typed in, so it has no original file.');
+  if (!bytes)
+    throw new HttpError(
+      404,
+      'NO_ORIGINAL_FILE',
+      'This measurement was typed in, so it has no original file.',
+    );
   return { filename: head.originalFilename ?? `${head.name}.csv`, bytes };
 }
 
 /** `DELETE /api/measurements/:mid` (needs write access to the system). */
-export async function deleteMeasurement(db: Database, user: User, measurementId: string): Promise<void> {
+export async function deleteMeasurement(
+  db: Database,
+  user: User,
+  measurementId: string,
+): Promise<void> {
   await requireMeasurement(db, user, measurementId, 'write');
   await deleteMeasurementRow(db, measurementId);
 }

@@ -1,5 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { CsvImportOptionsSchema, type CsvImportOptionsInput } from '../../shared/contracts/measurements';
+import {
+  CsvImportOptionsSchema,
+  type CsvImportOptionsInput,
+} from '../../shared/contracts/measurements';
 import { parseLevelCsv, type LevelCsvContext } from './parse-level-csv';
 import { readCsvTable } from './read-csv-table';
 
@@ -27,15 +30,27 @@ const levelOptions: CsvImportOptionsInput = {
 
 describe('parseLevelCsv', () => {
   it('reads ISO times and millimetre levels into seconds from the start and metres', () => {
-    const text = 'time,level_mm\n2024-05-31T10:00:00Z,12\n2024-05-31T10:00:05Z,13.5\n2024-05-31T10:00:10Z,15\n';
+    const text =
+      'time,level_mm\n2024-05-31T10:00:00Z,12\n2024-05-31T10:00:05Z,13.5\n2024-05-31T10:00:10Z,15\n';
     const parsed = parseText(text, levelOptions);
-    expect(parsed).toMatchObject({ ok: true, timeFormat: 'iso', acceptedCount: 3, rejectedCount: 0 });
+    expect(parsed).toMatchObject({
+      ok: true,
+      timeFormat: 'iso',
+      acceptedCount: 3,
+      rejectedCount: 0,
+    });
     if (!parsed.ok) return;
     expect(parsed.series).toEqual({
       startTime: '2024-05-31T10:00:00.000Z',
       beds: [{ bed: 'bed-a', t_s: [0, 5, 10], level_m: [0.012, 0.0135, 0.015] }],
     });
-    expect(parsed.rows[1]).toEqual({ line: 3, time: '2024-05-31T10:00:05.000Z', t_s: 5, bed: 'bed-a', level_m: 0.0135 });
+    expect(parsed.rows[1]).toEqual({
+      line: 3,
+      time: '2024-05-31T10:00:05.000Z',
+      t_s: 5,
+      bed: 'bed-a',
+      level_m: 0.0135,
+    });
   });
 
   it('converts an ultrasonic distance with the mounting height and local day-first times in a zone', () => {
@@ -56,7 +71,14 @@ describe('parseLevelCsv', () => {
     const text = 'elapsed,p_kpa,baro_hpa\n0,102.3,1013.25\n10,103.3,1013.25\n';
     const parsed = parseText(text, {
       time: { column: 'elapsed' },
-      level: { kind: 'pressure', column: 'p_kpa', unit: 'kPa', reference: 'absolute', barometricColumn: 'baro_hpa', barometricUnit: 'hPa' },
+      level: {
+        kind: 'pressure',
+        column: 'p_kpa',
+        unit: 'kPa',
+        reference: 'absolute',
+        barometricColumn: 'baro_hpa',
+        barometricUnit: 'hPa',
+      },
       bed: 'tank',
     });
     expect(parsed.ok).toBe(true);
@@ -98,32 +120,68 @@ describe('parseLevelCsv', () => {
 
   it('rejects a repeated time as a row, but refuses a file whose time keeps going backwards', () => {
     const once = parseText('time,level_mm\n0,10\n5,11\n5,11\n10,12\n', levelOptions);
-    expect(once.ok && once.rejected).toEqual([{ line: 4, reason: 'time is the same as that of line 3 (bed-a)', raw: '5,11' }]);
-    const reversed = ['time,level_mm', ...Array.from({ length: 20 }, (_, i) => `${100 - i * 5},10`)].join('\n');
+    expect(once.ok && once.rejected).toEqual([
+      { line: 4, reason: 'time is the same as that of line 3 (bed-a)', raw: '5,11' },
+    ]);
+    const reversed = [
+      'time,level_mm',
+      ...Array.from({ length: 20 }, (_, i) => `${100 - i * 5},10`),
+    ].join('\n');
     const refused = parseText(reversed, levelOptions);
-    expect(refused).toMatchObject({ ok: false, code: 'NON_MONOTONIC_TIME', message: expect.stringContaining('Sort the file by time') });
+    expect(refused).toMatchObject({
+      ok: false,
+      code: 'NON_MONOTONIC_TIME',
+      message: expect.stringContaining('Sort the file by time'),
+    });
   });
 
   it('refuses files whose times cannot be read, with the first reason', () => {
-    const refused = parseText('time,level_mm\n31/02/2024 10:00,1\n30/02/2024 10:00,2\n', { ...levelOptions, time: { column: 'time', format: 'dmy' } });
-    expect(refused).toMatchObject({ ok: false, code: 'UNREADABLE_TIMES', message: expect.stringContaining('Line 2: time "31/02/2024 10:00" is not a calendar date') });
+    const refused = parseText('time,level_mm\n31/02/2024 10:00,1\n30/02/2024 10:00,2\n', {
+      ...levelOptions,
+      time: { column: 'time', format: 'dmy' },
+    });
+    expect(refused).toMatchObject({
+      ok: false,
+      code: 'UNREADABLE_TIMES',
+      message: expect.stringContaining('Line 2: time "31/02/2024 10:00" is not a calendar date'),
+    });
   });
 
   it('names the missing column and lists the columns the file has', () => {
     const refused = parseText('t,level_mm\n0,1\n', levelOptions);
-    expect(refused).toMatchObject({ ok: false, code: 'UNKNOWN_COLUMN', message: expect.stringContaining('no column "time"; its columns are "t", "level_mm"') });
+    expect(refused).toMatchObject({
+      ok: false,
+      code: 'UNKNOWN_COLUMN',
+      message: expect.stringContaining('no column "time"; its columns are "t", "level_mm"'),
+    });
   });
 
   it('asks for the bed when neither a bed nor a bed column is given and the system has several', () => {
-    expect(parseText('time,level_mm\n0,1\n', { ...levelOptions, bed: undefined })).toMatchObject({ ok: false, code: 'BED_REQUIRED' });
-    expect(parseText('time,level_mm\n0,1\n', { ...levelOptions, bed: 'bed-q' })).toMatchObject({ ok: false, code: 'UNKNOWN_BED' });
-    const single = parseText('time,level_mm\n0,1\n', { ...levelOptions, bed: undefined }, { ...context, defaultVessel: 'bed-b' });
+    expect(parseText('time,level_mm\n0,1\n', { ...levelOptions, bed: undefined })).toMatchObject({
+      ok: false,
+      code: 'BED_REQUIRED',
+    });
+    expect(parseText('time,level_mm\n0,1\n', { ...levelOptions, bed: 'bed-q' })).toMatchObject({
+      ok: false,
+      code: 'UNKNOWN_BED',
+    });
+    const single = parseText(
+      'time,level_mm\n0,1\n',
+      { ...levelOptions, bed: undefined },
+      { ...context, defaultVessel: 'bed-b' },
+    );
     expect(single.ok && single.series.beds[0]?.bed).toBe('bed-b');
   });
 
   it('refuses an ambiguous date format and an unknown zone with what to choose', () => {
-    expect(parseText('time,level_mm\n01/02/2024 10:00,1\n', levelOptions)).toMatchObject({ ok: false, code: 'TIME_FORMAT_UNKNOWN' });
-    const zone = parseText('time,level_mm\n2024-01-01 10:00,1\n', { ...levelOptions, time: { column: 'time', timeZone: 'Atlantis/Capital' } });
+    expect(parseText('time,level_mm\n01/02/2024 10:00,1\n', levelOptions)).toMatchObject({
+      ok: false,
+      code: 'TIME_FORMAT_UNKNOWN',
+    });
+    const zone = parseText('time,level_mm\n2024-01-01 10:00,1\n', {
+      ...levelOptions,
+      time: { column: 'time', timeZone: 'Atlantis/Capital' },
+    });
     expect(zone).toMatchObject({ ok: false, code: 'INVALID_TIME_ZONE' });
   });
 });

@@ -83,51 +83,100 @@ interface RowReader {
   readLevel: ReturnType<typeof makeLevelReader>;
 }
 
-type RowOutcome = { ok: true; row: Accepted } | { ok: false; kind: 'time' | 'order' | 'value'; reason: string };
+type RowOutcome =
+  { ok: true; row: Accepted } | { ok: false; kind: 'time' | 'order' | 'value'; reason: string };
 
-function readRow(record: CsvRecord, r: RowReader, lastByBed: ReadonlyMap<string, Accepted>): RowOutcome {
+function readRow(
+  record: CsvRecord,
+  r: RowReader,
+  lastByBed: ReadonlyMap<string, Accepted>,
+): RowOutcome {
   const timeValue = parseTimeValue(record.fields[r.timeColumn] ?? '', r.format, r.zone, r.decimal);
   if (timeValue.kind === 'error') return { ok: false, kind: 'time', reason: timeValue.reason };
   const time = timeValue.kind === 'instant' ? timeValue.epochMs / 1000 : timeValue.seconds;
   const level = r.readLevel(record.fields);
   if (!level.ok) return { ok: false, kind: 'value', reason: level.reason };
-  const bed = r.bedColumn !== undefined ? (record.fields[r.bedColumn] ?? '').trim() : (r.fixedBed ?? '');
+  const bed =
+    r.bedColumn !== undefined ? (record.fields[r.bedColumn] ?? '').trim() : (r.fixedBed ?? '');
   const vessel = r.vessels.get(bed);
-  if (!vessel) return { ok: false, kind: 'value', reason: bed === '' ? 'the bed cell is empty' : `"${bed}" is not a vessel of this system` };
+  if (!vessel)
+    return {
+      ok: false,
+      kind: 'value',
+      reason: bed === '' ? 'the bed cell is empty' : `"${bed}" is not a vessel of this system`,
+    };
   const implausible = checkLevel(level.levelM, vessel);
   if (implausible) return { ok: false, kind: 'value', reason: implausible };
   const previous = lastByBed.get(bed);
   if (previous && time <= previous.time) {
     const relation = time === previous.time ? 'the same as' : 'before';
-    return { ok: false, kind: 'order', reason: `time is ${relation} that of line ${previous.line} (${bed})` };
+    return {
+      ok: false,
+      kind: 'order',
+      reason: `time is ${relation} that of line ${previous.line} (${bed})`,
+    };
   }
   return { ok: true, row: { line: record.line, bed, time, levelM: level.levelM } };
 }
 
 /** Checks the options against the file and the system, and builds the row reader. */
-function prepare(columns: readonly string[], records: readonly CsvRecord[], options: CsvImportOptions, context: LevelCsvContext): RowReader | Failure {
+function prepare(
+  columns: readonly string[],
+  records: readonly CsvRecord[],
+  options: CsvImportOptions,
+  context: LevelCsvContext,
+): RowReader | Failure {
   const resolved = resolveCsvColumns(columns, options);
   if (!resolved.ok) return fail(resolved.code, resolved.message);
   const col = resolved.columns;
   const zone = parseTimeZone(options.time.timeZone);
-  if (!zone) return fail('INVALID_TIME_ZONE', `"${options.time.timeZone}" is not a time zone; use an IANA name such as Europe/Lisbon, UTC, or an offset such as +02:00.`);
+  if (!zone)
+    return fail(
+      'INVALID_TIME_ZONE',
+      `"${options.time.timeZone}" is not a time zone; use an IANA name such as Europe/Lisbon, UTC, or an offset such as +02:00.`,
+    );
   const fixedBed = options.bedColumn ? undefined : (options.bed ?? context.defaultVessel);
-  if (col.bed === undefined && fixedBed === undefined) return fail('BED_REQUIRED', 'Choose the bed these levels were measured in, or the column that names it.');
+  if (col.bed === undefined && fixedBed === undefined)
+    return fail(
+      'BED_REQUIRED',
+      'Choose the bed these levels were measured in, or the column that names it.',
+    );
   const vessels = new Map(context.vessels.map((v) => [v.id, v]));
   if (fixedBed !== undefined && !vessels.has(fixedBed)) {
-    return fail('UNKNOWN_BED', `"${fixedBed}" is not a vessel of this system; choose one of ${[...vessels.keys()].join(', ')}.`);
+    return fail(
+      'UNKNOWN_BED',
+      `"${fixedBed}" is not a vessel of this system; choose one of ${[...vessels.keys()].join(', ')}.`,
+    );
   }
   let format: ConcreteTimeFormat;
   if (options.time.format === 'auto') {
     const detected = detectTimeFormat(records.map((r) => r.fields[col.time] ?? ''));
-    if (detected.format === null) return fail('TIME_FORMAT_UNKNOWN', `Cannot tell the time format: ${detected.reason}.`);
+    if (detected.format === null)
+      return fail('TIME_FORMAT_UNKNOWN', `Cannot tell the time format: ${detected.reason}.`);
     format = detected.format;
   } else {
     format = options.time.format;
   }
-  const levelColumns = { level: col.level, ...(col.barometric !== undefined ? { barometric: col.barometric } : {}) };
-  const readLevel = makeLevelReader(options.level, levelColumns, options.decimal, context.densityKgPerM3);
-  return { format, zone, decimal: options.decimal, timeColumn: col.time, bedColumn: col.bed, fixedBed, vessels, readLevel };
+  const levelColumns = {
+    level: col.level,
+    ...(col.barometric !== undefined ? { barometric: col.barometric } : {}),
+  };
+  const readLevel = makeLevelReader(
+    options.level,
+    levelColumns,
+    options.decimal,
+    context.densityKgPerM3,
+  );
+  return {
+    format,
+    zone,
+    decimal: options.decimal,
+    timeColumn: col.time,
+    bedColumn: col.bed,
+    fixedBed,
+    vessels,
+    readLevel,
+  };
 }
 
 /** Reads every record; see the module comment for what is rejected and what refuses the file. */
@@ -153,10 +202,20 @@ export function parseLevelCsv(
     }
     failures[outcome.kind]++;
     if (rejected.length < MEASUREMENT_MAX_REJECTED_KEPT) {
-      rejected.push({ line: record.line, reason: outcome.reason, raw: record.fields.join(separator).slice(0, 200) });
+      rejected.push({
+        line: record.line,
+        reason: outcome.reason,
+        raw: record.fields.join(separator).slice(0, 200),
+      });
     }
   }
-  const verdict = judgeRejections(records.length, accepted.length, failures.time, failures.order, rejected);
+  const verdict = judgeRejections(
+    records.length,
+    accepted.length,
+    failures.time,
+    failures.order,
+    rejected,
+  );
   if (verdict) return verdict;
   const rejectedCount = failures.time + failures.order + failures.value;
   return assemble(accepted, reader.format, rejected, rejectedCount, context.previewRows ?? 50);
@@ -165,18 +224,30 @@ export function parseLevelCsv(
 function checkLevel(levelM: number, vessel: KnownVessel): string | null {
   const mm = (m: number): string => `${(m * 1000).toFixed(1)} mm`;
   if (!Number.isFinite(levelM)) return 'the level is not a finite number';
-  if (levelM < -BELOW_FLOOR_TOLERANCE_M) return `level ${mm(levelM)} is below the floor of ${vessel.id}: check the mounting height, zero offset or unit`;
-  if (levelM > vessel.heightM + ABOVE_RIM_TOLERANCE_M) return `level ${mm(levelM)} is above the rim of ${vessel.id} (${mm(vessel.heightM)}): check the unit`;
+  if (levelM < -BELOW_FLOOR_TOLERANCE_M)
+    return `level ${mm(levelM)} is below the floor of ${vessel.id}: check the mounting height, zero offset or unit`;
+  if (levelM > vessel.heightM + ABOVE_RIM_TOLERANCE_M)
+    return `level ${mm(levelM)} is above the rim of ${vessel.id} (${mm(vessel.heightM)}): check the unit`;
   return null;
 }
 
 /** Refuses the whole file when nothing is usable, most times are unreadable, or time goes backwards often. */
-function judgeRejections(total: number, acceptedCount: number, timeFailures: number, orderFailures: number, rejected: RejectedRow[]): Failure | null {
+function judgeRejections(
+  total: number,
+  acceptedCount: number,
+  timeFailures: number,
+  orderFailures: number,
+  rejected: RejectedRow[],
+): Failure | null {
   const first = rejected[0];
   const example = first ? ` Line ${first.line}: ${first.reason}.` : '';
   if (total === 0) return fail('NO_DATA_ROWS', 'The file has a header but no data rows.');
   if (timeFailures > total / 2) {
-    return fail('UNREADABLE_TIMES', `${timeFailures} of ${total} times could not be read.${example} Choose the time column and its format.`, rejected);
+    return fail(
+      'UNREADABLE_TIMES',
+      `${timeFailures} of ${total} times could not be read.${example} Choose the time column and its format.`,
+      rejected,
+    );
   }
   if (orderFailures > Math.max(3, total * 0.02)) {
     const order = rejected.find((r) => r.reason.startsWith('time is'));
@@ -186,11 +257,18 @@ function judgeRejections(total: number, acceptedCount: number, timeFailures: num
       rejected,
     );
   }
-  if (acceptedCount === 0) return fail('NO_VALID_ROWS', `None of the ${total} rows could be used.${example}`, rejected);
+  if (acceptedCount === 0)
+    return fail('NO_VALID_ROWS', `None of the ${total} rows could be used.${example}`, rejected);
   return null;
 }
 
-function assemble(accepted: Accepted[], format: ConcreteTimeFormat, rejected: RejectedRow[], rejectedCount: number, previewRows: number): ParsedLevelCsv {
+function assemble(
+  accepted: Accepted[],
+  format: ConcreteTimeFormat,
+  rejected: RejectedRow[],
+  rejectedCount: number,
+  previewRows: number,
+): ParsedLevelCsv {
   const absolute = format !== 'elapsed-s';
   const t0 = Math.min(...accepted.map((a) => a.time));
   const beds = new Map<string, { bed: string; t_s: number[]; level_m: number[] }>();
@@ -210,7 +288,10 @@ function assemble(accepted: Accepted[], format: ConcreteTimeFormat, rejected: Re
   return {
     ok: true,
     timeFormat: format,
-    series: { startTime: absolute ? new Date(t0 * 1000).toISOString() : null, beds: [...beds.values()] },
+    series: {
+      startTime: absolute ? new Date(t0 * 1000).toISOString() : null,
+      beds: [...beds.values()],
+    },
     rows,
     acceptedCount: accepted.length,
     rejected,

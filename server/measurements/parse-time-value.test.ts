@@ -24,8 +24,12 @@ describe('parseTimeValue', () => {
   });
 
   it('reads times without an offset in the chosen zone, and lets an offset in the text win', () => {
-    expect(iso('2024-05-31 14:00:00', 'iso', zone('Europe/Lisbon'))).toBe('2024-05-31T13:00:00.000Z');
-    expect(iso('2024-05-31 14:00:00Z', 'iso', zone('Europe/Lisbon'))).toBe('2024-05-31T14:00:00.000Z');
+    expect(iso('2024-05-31 14:00:00', 'iso', zone('Europe/Lisbon'))).toBe(
+      '2024-05-31T13:00:00.000Z',
+    );
+    expect(iso('2024-05-31 14:00:00Z', 'iso', zone('Europe/Lisbon'))).toBe(
+      '2024-05-31T14:00:00.000Z',
+    );
   });
 
   it('reads day/month/year, month/day/year and year/month/day with their separators', () => {
@@ -38,7 +42,10 @@ describe('parseTimeValue', () => {
 
   it('refuses impossible dates and says which reading it tried', () => {
     const value = parseTimeValue('31/02/2024 10:00', 'dmy', utc);
-    expect(value).toEqual({ kind: 'error', reason: expect.stringContaining('not a calendar date read as dmy') });
+    expect(value).toEqual({
+      kind: 'error',
+      reason: expect.stringContaining('not a calendar date read as dmy'),
+    });
     expect(parseTimeValue('05/31/2024', 'dmy', utc).kind).toBe('error');
     expect(parseTimeValue('2024-13-01', 'iso', utc).kind).toBe('error');
     expect(parseTimeValue('', 'iso', utc)).toEqual({ kind: 'error', reason: 'time is empty' });
@@ -51,8 +58,14 @@ describe('parseTimeValue', () => {
 
   it('reads elapsed seconds as numbers, with a decimal comma, and as h:mm:ss', () => {
     expect(parseTimeValue('12.5', 'elapsed-s', utc)).toEqual({ kind: 'elapsed', seconds: 12.5 });
-    expect(parseTimeValue('12,5', 'elapsed-s', utc, ',')).toEqual({ kind: 'elapsed', seconds: 12.5 });
-    expect(parseTimeValue('1:02:03.5', 'elapsed-s', utc)).toEqual({ kind: 'elapsed', seconds: 3723.5 });
+    expect(parseTimeValue('12,5', 'elapsed-s', utc, ',')).toEqual({
+      kind: 'elapsed',
+      seconds: 12.5,
+    });
+    expect(parseTimeValue('1:02:03.5', 'elapsed-s', utc)).toEqual({
+      kind: 'elapsed',
+      seconds: 3723.5,
+    });
     expect(parseTimeValue('02:03', 'elapsed-s', utc)).toEqual({ kind: 'elapsed', seconds: 123 });
     expect(parseTimeValue('soon', 'elapsed-s', utc).kind).toBe('error');
   });

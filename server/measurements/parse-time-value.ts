@@ -6,9 +6,13 @@ import { wallTimeToEpochMs, type TimeZoneSpec, type WallTime } from './zoned-tim
 export type ConcreteTimeFormat = Exclude<TimeFormat, 'auto'>;
 
 /** An absolute instant (Unix ms), seconds since the logger started, or why the cell is unreadable. */
-export type TimeValue = { kind: 'instant'; epochMs: number } | { kind: 'elapsed'; seconds: number } | { kind: 'error'; reason: string };
+export type TimeValue =
+  | { kind: 'instant'; epochMs: number }
+  | { kind: 'elapsed'; seconds: number }
+  | { kind: 'error'; reason: string };
 
-const ISO = /^(\d{4})-(\d{1,2})-(\d{1,2})(?:[T ](\d{1,2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)?)?\s*(Z|[+-]\d{2}(?::?\d{2})?)?$/i;
+const ISO =
+  /^(\d{4})-(\d{1,2})-(\d{1,2})(?:[T ](\d{1,2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)?)?\s*(Z|[+-]\d{2}(?::?\d{2})?)?$/i;
 const CLOCK = /^(\d{1,2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)?\s*(am|pm)?$/i;
 const NUMBER = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:e[+-]?\d+)?$/i;
 
@@ -17,7 +21,9 @@ function fractionMs(digits: string | undefined): number {
 }
 
 /** Hours, minutes, seconds and ms of an `h:mm[:ss[.fff]] [am|pm]` clock; null when malformed. */
-function readClock(text: string): Pick<WallTime, 'hour' | 'minute' | 'second' | 'millisecond'> | null {
+function readClock(
+  text: string,
+): Pick<WallTime, 'hour' | 'minute' | 'second' | 'millisecond'> | null {
   const m = CLOCK.exec(text.trim());
   if (!m) return null;
   let hour = Number(m[1]);
@@ -45,19 +51,32 @@ function fullYear(text: string): number {
 /** `2024-05-31[T ]14:03[:22[.5]][Z|+02:00]`: an offset in the text wins over the chosen zone. */
 function readIso(text: string, zone: TimeZoneSpec): TimeValue {
   const m = ISO.exec(text);
-  if (!m) return { kind: 'error', reason: `time "${text}" is not ISO 8601 (e.g. 2024-05-31T14:03:22Z)` };
+  if (!m)
+    return { kind: 'error', reason: `time "${text}" is not ISO 8601 (e.g. 2024-05-31T14:03:22Z)` };
   const [year, month, day] = [Number(m[1]), Number(m[2]), Number(m[3])];
-  if (!validDate(year, month, day)) return { kind: 'error', reason: `time "${text}" is not a calendar date` };
+  if (!validDate(year, month, day))
+    return { kind: 'error', reason: `time "${text}" is not a calendar date` };
   const wall: WallTime = {
-    year, month, day,
-    hour: Number(m[4] ?? '0'), minute: Number(m[5] ?? '0'), second: Number(m[6] ?? '0'), millisecond: fractionMs(m[7]),
+    year,
+    month,
+    day,
+    hour: Number(m[4] ?? '0'),
+    minute: Number(m[5] ?? '0'),
+    second: Number(m[6] ?? '0'),
+    millisecond: fractionMs(m[7]),
   };
-  if (wall.hour > 23 || wall.minute > 59 || wall.second > 60) return { kind: 'error', reason: `time "${text}" has an impossible clock time` };
+  if (wall.hour > 23 || wall.minute > 59 || wall.second > 60)
+    return { kind: 'error', reason: `time "${text}" has an impossible clock time` };
   const offsetText = m[8];
   if (offsetText) {
     const offset = /^([+-])(\d{2}):?(\d{2})?$/.exec(offsetText);
-    const offsetMinutes = offset ? (offset[1] === '-' ? -1 : 1) * (Number(offset[2]) * 60 + Number(offset[3] ?? '0')) : 0;
-    return { kind: 'instant', epochMs: wallTimeToEpochMs(wall, { kind: 'offset', offsetMinutes, label: offsetText }) };
+    const offsetMinutes = offset
+      ? (offset[1] === '-' ? -1 : 1) * (Number(offset[2]) * 60 + Number(offset[3] ?? '0'))
+      : 0;
+    return {
+      kind: 'instant',
+      epochMs: wallTimeToEpochMs(wall, { kind: 'offset', offsetMinutes, label: offsetText }),
+    };
   }
   return { kind: 'instant', epochMs: wallTimeToEpochMs(wall, zone) };
 }
@@ -65,9 +84,17 @@ function readIso(text: string, zone: TimeZoneSpec): TimeValue {
 const ORDERS = { ymd: [0, 1, 2], dmy: [2, 1, 0], mdy: [2, 0, 1] } as const;
 
 /** A date with separators `/`, `.` or `-` in the given field order, then an optional clock time. */
-function readOrderedDate(text: string, format: 'ymd' | 'dmy' | 'mdy', zone: TimeZoneSpec): TimeValue {
+function readOrderedDate(
+  text: string,
+  format: 'ymd' | 'dmy' | 'mdy',
+  zone: TimeZoneSpec,
+): TimeValue {
   const m = /^(\d{1,4})[/.-](\d{1,2})[/.-](\d{1,4})(?:[ T,]+(.+))?$/.exec(text);
-  const example = { ymd: '2024/05/31 14:03:22', dmy: '31/05/2024 14:03:22', mdy: '05/31/2024 2:03:22 PM' }[format];
+  const example = {
+    ymd: '2024/05/31 14:03:22',
+    dmy: '31/05/2024 14:03:22',
+    mdy: '05/31/2024 2:03:22 PM',
+  }[format];
   if (!m) return { kind: 'error', reason: `time "${text}" does not look like ${example}` };
   const fields = [m[1] ?? '', m[2] ?? '', m[3] ?? ''];
   const [yi, mi, di] = ORDERS[format];
@@ -75,10 +102,15 @@ function readOrderedDate(text: string, format: 'ymd' | 'dmy' | 'mdy', zone: Time
   const month = Number(fields[mi]);
   const day = Number(fields[di]);
   if (!validDate(year, month, day)) {
-    return { kind: 'error', reason: `time "${text}" is not a calendar date read as ${format} (day ${day}, month ${month})` };
+    return {
+      kind: 'error',
+      reason: `time "${text}" is not a calendar date read as ${format} (day ${day}, month ${month})`,
+    };
   }
-  const clock = m[4] === undefined ? { hour: 0, minute: 0, second: 0, millisecond: 0 } : readClock(m[4]);
-  if (!clock) return { kind: 'error', reason: `time "${text}" has a clock time that is not h:mm[:ss]` };
+  const clock =
+    m[4] === undefined ? { hour: 0, minute: 0, second: 0, millisecond: 0 } : readClock(m[4]);
+  if (!clock)
+    return { kind: 'error', reason: `time "${text}" has a clock time that is not h:mm[:ss]` };
   return { kind: 'instant', epochMs: wallTimeToEpochMs({ year, month, day, ...clock }, zone) };
 }
 
@@ -87,14 +119,23 @@ function readElapsed(text: string): TimeValue {
   if (NUMBER.test(text)) return { kind: 'elapsed', seconds: Number(text) };
   const m = /^(?:(\d+):)?(\d{1,2}):(\d{2}(?:[.,]\d+)?)$/.exec(text);
   if (!m) return { kind: 'error', reason: `time "${text}" is not a number of seconds or h:mm:ss` };
-  return { kind: 'elapsed', seconds: Number(m[1] ?? '0') * 3600 + Number(m[2]) * 60 + Number((m[3] ?? '0').replace(',', '.')) };
+  return {
+    kind: 'elapsed',
+    seconds:
+      Number(m[1] ?? '0') * 3600 + Number(m[2]) * 60 + Number((m[3] ?? '0').replace(',', '.')),
+  };
 }
 
 /**
  * Reads one time cell. `decimal` is the decimal separator of numeric formats. Instants come back
  * as Unix ms; `elapsed-s` as seconds. Every failure says what was expected.
  */
-export function parseTimeValue(raw: string, format: ConcreteTimeFormat, zone: TimeZoneSpec, decimal: '.' | ',' = '.'): TimeValue {
+export function parseTimeValue(
+  raw: string,
+  format: ConcreteTimeFormat,
+  zone: TimeZoneSpec,
+  decimal: '.' | ',' = '.',
+): TimeValue {
   const text = raw.trim();
   if (text === '') return { kind: 'error', reason: 'time is empty' };
   const numeric = decimal === ',' ? text.replace(',', '.') : text;
@@ -107,7 +148,8 @@ export function parseTimeValue(raw: string, format: ConcreteTimeFormat, zone: Ti
       return readOrderedDate(text, format, zone);
     case 'epoch-s':
     case 'epoch-ms':
-      if (!NUMBER.test(numeric)) return { kind: 'error', reason: `time "${text}" is not a Unix time number` };
+      if (!NUMBER.test(numeric))
+        return { kind: 'error', reason: `time "${text}" is not a Unix time number` };
       return { kind: 'instant', epochMs: Number(numeric) * (format === 'epoch-s' ? 1000 : 1) };
     case 'elapsed-s':
       return readElapsed(numeric);

@@ -22,7 +22,13 @@ export interface CsvRecord {
 
 /** The table, or a stable code and a message saying what to do. */
 export type CsvTable =
-  | { ok: true; columns: string[]; headerLine: number | null; delimiter: string; records: CsvRecord[] }
+  | {
+      ok: true;
+      columns: string[];
+      headerLine: number | null;
+      delimiter: string;
+      records: CsvRecord[];
+    }
   | { ok: false; code: string; message: string };
 
 const CANDIDATES = [',', ';', '\t', '|'] as const;
@@ -51,7 +57,8 @@ function mode(values: readonly number[]): number {
   let best = 0;
   let bestCount = 0;
   for (const [value, count] of counts) {
-    if (count > bestCount || (count === bestCount && value > best)) [best, bestCount] = [value, count];
+    if (count > bestCount || (count === bestCount && value > best))
+      [best, bestCount] = [value, count];
   }
   return best;
 }
@@ -79,7 +86,11 @@ function detectHeaderLine(lines: readonly string[], delimiter: string): number {
   for (let i = 0; i < content.length; i++) {
     const here = content[i];
     const next = content[i + 1];
-    if (here && fieldCount(here.text, delimiter) === typical && (!next || fieldCount(next.text, delimiter) === typical)) {
+    if (
+      here &&
+      fieldCount(here.text, delimiter) === typical &&
+      (!next || fieldCount(next.text, delimiter) === typical)
+    ) {
       return here.line;
     }
   }
@@ -104,15 +115,20 @@ function toRecords(output: unknown, lineOffset: number): CsvRecord[] {
   return output.map((item: unknown) => {
     const entry = item as { record?: unknown; info?: { lines?: unknown } };
     const fields = Array.isArray(entry.record) ? entry.record.map(String) : [];
-    return { line: (typeof entry.info?.lines === 'number' ? entry.info.lines : 0) + lineOffset, fields };
+    return {
+      line: (typeof entry.info?.lines === 'number' ? entry.info.lines : 0) + lineOffset,
+      fields,
+    };
   });
 }
 
 /** Reads the records after the header; csv-parse errors become `CSV_MALFORMED` naming the line. */
 export function readCsvTable(text: string, options: CsvTableOptions): CsvTable {
   const sample = text.split(/\r\n|\n|\r/, SAMPLE_LINES);
-  if (!sample.some(isContent)) return { ok: false, code: 'EMPTY_FILE', message: 'The file has no data lines.' };
-  const delimiter = options.delimiter === 'auto' ? detectDelimiter(sample, options.decimal) : options.delimiter;
+  if (!sample.some(isContent))
+    return { ok: false, code: 'EMPTY_FILE', message: 'The file has no data lines.' };
+  const delimiter =
+    options.delimiter === 'auto' ? detectDelimiter(sample, options.decimal) : options.delimiter;
   const headerLine = options.headerLine ?? detectHeaderLine(sample, delimiter);
   // Cut the preamble off ourselves: csv-parse's from_line does not count comment lines.
   const start = lineStart(text, headerLine);
@@ -132,17 +148,31 @@ export function readCsvTable(text: string, options: CsvTableOptions): CsvTable {
     });
   } catch (error) {
     if (error instanceof CsvError) {
-      return { ok: false, code: 'CSV_MALFORMED', message: `The CSV cannot be read: ${error.message}. Check the delimiter and the quotes on that line.` };
+      return {
+        ok: false,
+        code: 'CSV_MALFORMED',
+        message: `The CSV cannot be read: ${error.message}. Check the delimiter and the quotes on that line.`,
+      };
     }
     throw error;
   }
   const records = toRecords(output, headerLine - 1);
   if (records.length > MEASUREMENT_MAX_ROWS + 1) {
-    return { ok: false, code: 'TOO_MANY_ROWS', message: `The file has more than ${MEASUREMENT_MAX_ROWS} rows; split it or log less often.` };
+    return {
+      ok: false,
+      code: 'TOO_MANY_ROWS',
+      message: `The file has more than ${MEASUREMENT_MAX_ROWS} rows; split it or log less often.`,
+    };
   }
   if (!options.hasHeader) {
     const width = Math.max(0, ...records.map((r) => r.fields.length));
-    return { ok: true, columns: Array.from({ length: width }, (_, i) => String(i + 1)), headerLine: null, delimiter, records };
+    return {
+      ok: true,
+      columns: Array.from({ length: width }, (_, i) => String(i + 1)),
+      headerLine: null,
+      delimiter,
+      records,
+    };
   }
   const [header, ...data] = records;
   if (!header) return { ok: false, code: 'EMPTY_FILE', message: 'The file has no header line.' };

@@ -10,14 +10,18 @@ export interface ResolvedColumns {
 }
 
 /** The indices, or `UNKNOWN_COLUMN` / `BAROMETER_REQUIRED` with a message listing what the file has. */
-export type ColumnResolution = { ok: true; columns: ResolvedColumns } | { ok: false; code: string; message: string };
+export type ColumnResolution =
+  { ok: true; columns: ResolvedColumns } | { ok: false; code: string; message: string };
 
 function normalise(name: string): string {
   return name.trim().toLowerCase();
 }
 
 /** Column names match without case and surrounding spaces; for headerless files they are "1", "2", ... */
-export function resolveCsvColumns(header: readonly string[], options: CsvImportOptions): ColumnResolution {
+export function resolveCsvColumns(
+  header: readonly string[],
+  options: CsvImportOptions,
+): ColumnResolution {
   const names = header.map(normalise);
   const missing: string[] = [];
   const find = (name: string | undefined): number | undefined => {
@@ -28,7 +32,8 @@ export function resolveCsvColumns(header: readonly string[], options: CsvImportO
   };
   const time = find(options.time.column);
   const level = find(options.level.column);
-  const barometric = options.level.kind === 'pressure' ? find(options.level.barometricColumn) : undefined;
+  const barometric =
+    options.level.kind === 'pressure' ? find(options.level.barometricColumn) : undefined;
   const bed = find(options.bedColumn);
   if (missing.length > 0 || time === undefined || level === undefined) {
     const list = header.map((h) => `"${h}"`).join(', ');
@@ -38,12 +43,26 @@ export function resolveCsvColumns(header: readonly string[], options: CsvImportO
       message: `The file has no column ${missing.map((m) => `"${m}"`).join(', ')}; its columns are ${list}. Check the header line and the delimiter.`,
     };
   }
-  if (options.level.kind === 'pressure' && options.level.reference === 'absolute' && barometric === undefined && options.level.barometricPressure === undefined) {
+  if (
+    options.level.kind === 'pressure' &&
+    options.level.reference === 'absolute' &&
+    barometric === undefined &&
+    options.level.barometricPressure === undefined
+  ) {
     return {
       ok: false,
       code: 'BAROMETER_REQUIRED',
-      message: 'An absolute pressure sensor also reads the air above the water: choose a barometric column or enter a constant air pressure.',
+      message:
+        'An absolute pressure sensor also reads the air above the water: choose a barometric column or enter a constant air pressure.',
     };
   }
-  return { ok: true, columns: { time, level, ...(barometric !== undefined ? { barometric } : {}), ...(bed !== undefined ? { bed } : {}) } };
+  return {
+    ok: true,
+    columns: {
+      time,
+      level,
+      ...(barometric !== undefined ? { barometric } : {}),
+      ...(bed !== undefined ? { bed } : {}),
+    },
+  };
 }

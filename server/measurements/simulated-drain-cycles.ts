@@ -14,15 +14,25 @@ export interface CycleEvent {
  * integrator) and the bed levels the events carry (`values.levelM`), else `levelAt(t)` from the
  * sampled series, else NaN.
  */
-export function simulatedDrainCycles(events: readonly CycleEvent[], bed: string, levelAt?: (timeS: number) => number): DrainCycle[] {
-  const level = (event: CycleEvent): number => event.values?.['levelM'] ?? levelAt?.(event.t_s) ?? Number.NaN;
+export function simulatedDrainCycles(
+  events: readonly CycleEvent[],
+  bed: string,
+  levelAt?: (timeS: number) => number,
+): DrainCycle[] {
+  const level = (event: CycleEvent): number =>
+    event.values?.['levelM'] ?? levelAt?.(event.t_s) ?? Number.NaN;
   const cycles: DrainCycle[] = [];
   let primed: CycleEvent | undefined;
   for (const event of events) {
     if (event.where !== bed) continue;
     if (event.kind === 'primed') primed = event;
     else if (event.kind === 'siphon-break' && primed) {
-      cycles.push({ primeS: primed.t_s, breakS: event.t_s, highM: level(primed), lowM: level(event) });
+      cycles.push({
+        primeS: primed.t_s,
+        breakS: event.t_s,
+        highM: level(primed),
+        lowM: level(event),
+      });
       primed = undefined;
     }
   }

@@ -8,7 +8,8 @@ import { spreadOf, type CycleSpreads } from './cycle-figures';
  */
 export function stopwatchSpreads(entries: readonly StopwatchEntry[], bed: string): CycleSpreads {
   const mine = entries.filter((e) => e.bed === bed);
-  const marks = (pick: (e: StopwatchEntry) => number | undefined): number[] => mine.map(pick).filter((v): v is number => v !== undefined);
+  const marks = (pick: (e: StopwatchEntry) => number | undefined): number[] =>
+    mine.map(pick).filter((v): v is number => v !== undefined);
   return {
     cycles: mine.length,
     period: spreadOf(mine.map((e) => e.fillTime + e.drainTime)),

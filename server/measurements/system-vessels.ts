@@ -14,8 +14,14 @@ export interface SystemVessels {
 export function systemVessels(scenarioDocument: unknown): SystemVessels {
   const parsed = parseScenario(scenarioDocument);
   if (!parsed.success) {
-    const fields = parsed.issues.map((i) => ({ path: i.path ? `scenario.${i.path}` : 'scenario', message: i.message }));
-    throw badRequest('The system has scenario problems; fix them in the editor before adding measurements.', fields);
+    const fields = parsed.issues.map((i) => ({
+      path: i.path ? `scenario.${i.path}` : 'scenario',
+      message: i.message,
+    }));
+    throw badRequest(
+      'The system has scenario problems; fix them in the editor before adding measurements.',
+      fields,
+    );
   }
   const scenario = parsed.scenario;
   return {

@@ -14,7 +14,10 @@ export interface CoefficientValue {
  * bell-siphon drain, `dischargeLossMultiplier` on any drain, `flowScale` on a pump. A value for a
  * bed or pump the scenario no longer has, or a k_p for a plain standpipe, is skipped.
  */
-export function withCoefficients(scenario: Scenario, values: readonly CoefficientValue[]): Scenario {
+export function withCoefficients(
+  scenario: Scenario,
+  values: readonly CoefficientValue[],
+): Scenario {
   const copy = structuredClone(scenario);
   for (const { key, target, value } of values) {
     if (key === 'flowScale') {

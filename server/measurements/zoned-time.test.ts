@@ -5,7 +5,15 @@ const wall = (iso: string): WallTime => {
   const [date = '', time = '00:00:00'] = iso.split('T');
   const [year, month, day] = date.split('-').map(Number);
   const [hour, minute, second] = time.split(':').map(Number);
-  return { year: year ?? 0, month: month ?? 0, day: day ?? 0, hour: hour ?? 0, minute: minute ?? 0, second: second ?? 0, millisecond: 0 };
+  return {
+    year: year ?? 0,
+    month: month ?? 0,
+    day: day ?? 0,
+    hour: hour ?? 0,
+    minute: minute ?? 0,
+    second: second ?? 0,
+    millisecond: 0,
+  };
 };
 
 const at = (iso: string, zone: string): string => {

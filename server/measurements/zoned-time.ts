@@ -15,7 +15,8 @@ export interface WallTime {
 }
 
 /** A time zone ready to convert: a fixed offset, or an IANA zone name. */
-export type TimeZoneSpec = { kind: 'offset'; offsetMinutes: number; label: string } | { kind: 'iana'; name: string };
+export type TimeZoneSpec =
+  { kind: 'offset'; offsetMinutes: number; label: string } | { kind: 'iana'; name: string };
 
 const OFFSET_PATTERN = /^(?:UTC|GMT)?\s*([+-])(\d{1,2})(?::?(\d{2}))?$/i;
 
@@ -65,8 +66,16 @@ function formatterFor(zone: string): Intl.DateTimeFormat {
 /** Offset of an IANA zone from UTC at the instant `epochMs`, in ms (local = UTC + offset). */
 function ianaOffsetMs(zone: string, epochMs: number): number {
   const parts = formatterFor(zone).formatToParts(new Date(epochMs));
-  const field = (type: Intl.DateTimeFormatPartTypes): number => Number(parts.find((p) => p.type === type)?.value ?? 0);
-  const asUtc = Date.UTC(field('year'), field('month') - 1, field('day'), field('hour'), field('minute'), field('second'));
+  const field = (type: Intl.DateTimeFormatPartTypes): number =>
+    Number(parts.find((p) => p.type === type)?.value ?? 0);
+  const asUtc = Date.UTC(
+    field('year'),
+    field('month') - 1,
+    field('day'),
+    field('hour'),
+    field('minute'),
+    field('second'),
+  );
   return asUtc - (epochMs - (((epochMs % 1000) + 1000) % 1000));
 }
 
@@ -78,11 +87,21 @@ function ianaOffsetMs(zone: string, epochMs: number): number {
  * hour skipped when clocks go forward is read with the earlier offset, landing just after the change.
  */
 export function wallTimeToEpochMs(wall: WallTime, zone: TimeZoneSpec): number {
-  const naive = Date.UTC(wall.year, wall.month - 1, wall.day, wall.hour, wall.minute, wall.second, wall.millisecond);
+  const naive = Date.UTC(
+    wall.year,
+    wall.month - 1,
+    wall.day,
+    wall.hour,
+    wall.minute,
+    wall.second,
+    wall.millisecond,
+  );
   if (zone.kind === 'offset') return naive - zone.offsetMinutes * 60_000;
   const dayMs = 86_400_000;
   const before = ianaOffsetMs(zone.name, naive - dayMs);
   const after = ianaOffsetMs(zone.name, naive + dayMs);
-  const valid = [naive - before, naive - after].filter((t) => naive - ianaOffsetMs(zone.name, t) === t);
+  const valid = [naive - before, naive - after].filter(
+    (t) => naive - ianaOffsetMs(zone.name, t) === t,
+  );
   return valid.length > 0 ? Math.min(...valid) : naive - before;
 }

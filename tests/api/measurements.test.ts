@@ -47,7 +47,9 @@ describe('measurements API', () => {
     t = await createTestContext();
     app = createApp(t.ctx);
     owner = (await signedInClient(app, t.ctx, { name: 'Mara Meter' })).client;
-    const res = await owner.post('/api/systems').send({ name: 'Bench', scenario: EXAMPLE_SCENARIO_FILE });
+    const res = await owner
+      .post('/api/systems')
+      .send({ name: 'Bench', scenario: EXAMPLE_SCENARIO_FILE });
     system = SystemSchema.parse(res.body);
   });
   afterEach(async () => {
@@ -61,7 +63,8 @@ describe('measurements API', () => {
       .attach('file', Buffer.isBuffer(bytes) ? bytes : Buffer.from(bytes), filename);
 
   const listCount = async (): Promise<number> =>
-    MeasurementListSchema.parse((await owner.get(`/api/systems/${system.id}/measurements`)).body).items.length;
+    MeasurementListSchema.parse((await owner.get(`/api/systems/${system.id}/measurements`)).body)
+      .items.length;
 
   it('stores an uploaded CSV with its parsed series, rejected rows and original bytes', async () => {
     const res = await upload(GOOD_CSV, 'bench-log.csv');
@@ -76,11 +79,26 @@ describe('measurements API', () => {
       startTime: '2024-05-31T09:00:00.000Z', // Lisbon is UTC+1 in May
       createdByName: 'Mara Meter',
     });
-    expect(measurement.beds).toEqual([{ bed: 'bed-a', samples: 3, durationS: 15, minLevel_m: 0.025, maxLevel_m: 0.04 }]);
-    const series = MeasuredSeriesSchema.parse((await owner.get(`/api/measurements/${measurement.id}/series`)).body);
+    expect(measurement.beds).toEqual([
+      { bed: 'bed-a', samples: 3, durationS: 15, minLevel_m: 0.025, maxLevel_m: 0.04 },
+    ]);
+    const series = MeasuredSeriesSchema.parse(
+      (await owner.get(`/api/measurements/${measurement.id}/series`)).body,
+    );
     expect(series.beds).toEqual([{ bed: 'bed-a', t_s: [0, 5, 15], level_m: [0.025, 0.03, 0.04] }]);
-    const rejected = RejectedListSchema.parse((await owner.get(`/api/measurements/${measurement.id}/rejected`)).body);
-    expect(rejected).toEqual({ total: 1, items: [{ line: 6, reason: 'distance "not-read" is not a number', raw: '2024-05-31 10:00:10,not-read' }] });
+    const rejected = RejectedListSchema.parse(
+      (await owner.get(`/api/measurements/${measurement.id}/rejected`)).body,
+    );
+    expect(rejected).toEqual({
+      total: 1,
+      items: [
+        {
+          line: 6,
+          reason: 'distance "not-read" is not a number',
+          raw: '2024-05-31 10:00:10,not-read',
+        },
+      ],
+    });
     const original = await owner.get(`/api/measurements/${measurement.id}/original`).buffer(true);
     expect(original.headers['content-disposition']).toContain('bench-log.csv');
     expect(Buffer.from(original.body as Buffer).toString('utf8')).toBe(GOOD_CSV);
@@ -89,13 +107,30 @@ describe('measurements API', () => {
 
   it('previews a file without storing it, guessing options when none are sent', async () => {
     const csv = 'timestamp,level_mm\n2024-05-31T10:00:00Z,120\n2024-05-31T10:00:05Z,121\nbad,122\n';
-    const res = await owner.post(`/api/systems/${system.id}/measurements/preview`).attach('file', Buffer.from(csv), 'log.csv');
+    const res = await owner
+      .post(`/api/systems/${system.id}/measurements/preview`)
+      .attach('file', Buffer.from(csv), 'log.csv');
     expect(res.status, JSON.stringify(res.body)).toBe(200);
     const preview = CsvPreviewSchema.parse(res.body);
-    expect(preview).toMatchObject({ columns: ['timestamp', 'level_mm'], headerLine: 1, delimiter: ',', timeFormat: 'iso', acceptedCount: 2, rejectedCount: 1, problem: null });
-    expect(preview.options).toMatchObject({ time: { column: 'timestamp' }, level: { kind: 'level', column: 'level_mm', unit: 'mm' }, bed: 'bed-a' });
+    expect(preview).toMatchObject({
+      columns: ['timestamp', 'level_mm'],
+      headerLine: 1,
+      delimiter: ',',
+      timeFormat: 'iso',
+      acceptedCount: 2,
+      rejectedCount: 1,
+      problem: null,
+    });
+    expect(preview.options).toMatchObject({
+      time: { column: 'timestamp' },
+      level: { kind: 'level', column: 'level_mm', unit: 'mm' },
+      bed: 'bed-a',
+    });
     expect(preview.rows.map((r) => r.level_m)).toEqual([0.12, 0.121]);
-    expect(preview.rejected[0]).toMatchObject({ line: 4, reason: expect.stringContaining('not ISO 8601') });
+    expect(preview.rejected[0]).toMatchObject({
+      line: 4,
+      reason: expect.stringContaining('not ISO 8601'),
+    });
     expect(await listCount()).toBe(0);
   });
 
@@ -105,27 +140,75 @@ describe('measurements API', () => {
       .send({ text: 'when,depth\n0,1\n', options: { ...OPTIONS, time: { column: 'time' } } });
     const preview = CsvPreviewSchema.parse(res.body);
     expect(preview.columns).toEqual(['when', 'depth']);
-    expect(preview.problem).toMatchObject({ code: 'UNKNOWN_COLUMN', message: expect.stringContaining('its columns are "when", "depth"') });
+    expect(preview.problem).toMatchObject({
+      code: 'UNKNOWN_COLUMN',
+      message: expect.stringContaining('its columns are "when", "depth"'),
+    });
   });
 
   it('accepts pasted CSV text as JSON', async () => {
-    const res = await owner.post(`/api/systems/${system.id}/measurements`).send({ text: GOOD_CSV, options: { ...OPTIONS, name: 'Pasted log' } });
+    const res = await owner
+      .post(`/api/systems/${system.id}/measurements`)
+      .send({ text: GOOD_CSV, options: { ...OPTIONS, name: 'Pasted log' } });
     expect(res.status, JSON.stringify(res.body)).toBe(201);
-    expect(MeasurementSchema.parse(res.body)).toMatchObject({ name: 'Pasted log', originalFilename: 'pasted.csv' });
+    expect(MeasurementSchema.parse(res.body)).toMatchObject({
+      name: 'Pasted log',
+      originalFilename: 'pasted.csv',
+    });
   });
 
   it('refuses bad files with a code and a fix, and loses nothing already stored', async () => {
     expect((await upload(GOOD_CSV, 'keep.csv')).status).toBe(201);
     const cases: [Buffer | string, string, unknown, number, string][] = [
-      [Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0]), 'photo.csv', OPTIONS, 415, 'NOT_A_CSV'],
-      [Buffer.from([0x50, 0x4b, 0x03, 0x04, 1, 2]), 'levels.xlsx', OPTIONS, 415, 'UNSUPPORTED_FILE_TYPE'],
-      [Buffer.alloc(MEASUREMENT_MAX_FILE_BYTES + 1, 0x31), 'huge.csv', OPTIONS, 413, 'FILE_TOO_LARGE'],
+      [
+        Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0]),
+        'photo.csv',
+        OPTIONS,
+        415,
+        'NOT_A_CSV',
+      ],
+      [
+        Buffer.from([0x50, 0x4b, 0x03, 0x04, 1, 2]),
+        'levels.xlsx',
+        OPTIONS,
+        415,
+        'UNSUPPORTED_FILE_TYPE',
+      ],
+      [
+        Buffer.alloc(MEASUREMENT_MAX_FILE_BYTES + 1, 0x31),
+        'huge.csv',
+        OPTIONS,
+        413,
+        'FILE_TOO_LARGE',
+      ],
       ['t,level\n0,1\n', 'columns.csv', OPTIONS, 400, 'UNKNOWN_COLUMN'],
       ['time,distance_mm\nnoon,300\nlater,301\n', 'guess.csv', OPTIONS, 400, 'TIME_FORMAT_UNKNOWN'],
-      ['time,distance_mm\n31/05/2024 10:00,300\n31/05/2024 10:01,301\n', 'times.csv', { ...OPTIONS, time: { column: 'time', format: 'iso' } }, 400, 'UNREADABLE_TIMES'],
-      ['time,distance_mm\n' + Array.from({ length: 30 }, (_, i) => `2024-05-31 10:${String(59 - i).padStart(2, '0')}:00,300`).join('\n'), 'backwards.csv', OPTIONS, 400, 'NON_MONOTONIC_TIME'],
+      [
+        'time,distance_mm\n31/05/2024 10:00,300\n31/05/2024 10:01,301\n',
+        'times.csv',
+        { ...OPTIONS, time: { column: 'time', format: 'iso' } },
+        400,
+        'UNREADABLE_TIMES',
+      ],
+      [
+        'time,distance_mm\n' +
+          Array.from(
+            { length: 30 },
+            (_, i) => `2024-05-31 10:${String(59 - i).padStart(2, '0')}:00,300`,
+          ).join('\n'),
+        'backwards.csv',
+        OPTIONS,
+        400,
+        'NON_MONOTONIC_TIME',
+      ],
       ['', 'empty.csv', OPTIONS, 400, 'EMPTY_FILE'],
-      [GOOD_CSV, 'zone.csv', { ...OPTIONS, time: { column: 'time', timeZone: 'Nowhere/Land' } }, 400, 'INVALID_TIME_ZONE'],
+      [
+        GOOD_CSV,
+        'zone.csv',
+        { ...OPTIONS, time: { column: 'time', timeZone: 'Nowhere/Land' } },
+        400,
+        'INVALID_TIME_ZONE',
+      ],
       [GOOD_CSV, 'bed.csv', { ...OPTIONS, bed: 'bed-z' }, 400, 'UNKNOWN_BED'],
     ];
     for (const [bytes, name, options, status, code] of cases) {
@@ -135,13 +218,24 @@ describe('measurements API', () => {
       expect(error.code, name).toBe(code);
       expect(error.message.length, name).toBeGreaterThan(20);
     }
-    const noFile = await owner.post(`/api/systems/${system.id}/measurements`).field('options', JSON.stringify(OPTIONS));
+    const noFile = await owner
+      .post(`/api/systems/${system.id}/measurements`)
+      .field('options', JSON.stringify(OPTIONS));
     expect(ApiErrorSchema.parse(noFile.body).error.fields?.[0]?.path).toBe('file');
-    const badOptions = await upload(GOOD_CSV, 'opts.csv', { ...OPTIONS, level: { kind: 'level', column: 'x', unit: 'furlong' } });
-    expect(ApiErrorSchema.parse(badOptions.body).error.fields?.map((f) => f.path)).toEqual(['options.level.unit']);
-    const items = MeasurementListSchema.parse((await owner.get(`/api/systems/${system.id}/measurements`)).body).items;
+    const badOptions = await upload(GOOD_CSV, 'opts.csv', {
+      ...OPTIONS,
+      level: { kind: 'level', column: 'x', unit: 'furlong' },
+    });
+    expect(ApiErrorSchema.parse(badOptions.body).error.fields?.map((f) => f.path)).toEqual([
+      'options.level.unit',
+    ]);
+    const items = MeasurementListSchema.parse(
+      (await owner.get(`/api/systems/${system.id}/measurements`)).body,
+    ).items;
     expect(items.map((m) => m.originalFilename)).toEqual(['keep.csv']);
-    const series = MeasuredSeriesSchema.parse((await owner.get(`/api/measurements/${items[0]?.id}/series`)).body);
+    const series = MeasuredSeriesSchema.parse(
+      (await owner.get(`/api/measurements/${items[0]?.id}/series`)).body,
+    );
     expect(series.beds[0]?.t_s).toEqual([0, 5, 15]);
   });
 
@@ -159,10 +253,16 @@ describe('measurements API', () => {
       { bed: 'bed-a', fillTime: 250, drainTime: 240, highMark: 0.28, lowMark: 0.025 },
       { bed: 'bed-a', fillTime: 252, drainTime: 245 },
     ]);
-    expect(log.beds).toEqual([{ bed: 'bed-a', samples: 2, durationS: 987, minLevel_m: 0.025, maxLevel_m: 0.28 }]);
-    const bad = await owner.post(`/api/systems/${system.id}/measurements/stopwatch`).send({ name: 'x', entries: [{ bed: 'tank', fillTime: 1, drainTime: 1 }] });
+    expect(log.beds).toEqual([
+      { bed: 'bed-a', samples: 2, durationS: 987, minLevel_m: 0.025, maxLevel_m: 0.28 },
+    ]);
+    const bad = await owner
+      .post(`/api/systems/${system.id}/measurements/stopwatch`)
+      .send({ name: 'x', entries: [{ bed: 'tank', fillTime: 1, drainTime: 1 }] });
     expect(bad.status).toBe(400);
-    expect(ApiErrorSchema.parse(bad.body).error.fields).toEqual([{ path: 'entries[0].bed', message: expect.stringContaining('not a bed of this system') }]);
+    expect(ApiErrorSchema.parse(bad.body).error.fields).toEqual([
+      { path: 'entries[0].bed', message: expect.stringContaining('not a bed of this system') },
+    ]);
     const original = await owner.get(`/api/measurements/${log.id}/original`);
     expect(ApiErrorSchema.parse(original.body).error.code).toBe('NO_ORIGINAL_FILE');
   });
@@ -172,7 +272,9 @@ describe('measurements API', () => {
     const second = MeasurementSchema.parse((await upload(GOOD_CSV, 'b.csv')).body);
     expect((await owner.delete(`/api/measurements/${first.id}`)).status).toBe(204);
     expect((await owner.get(`/api/measurements/${first.id}`)).status).toBe(404);
-    const items = MeasurementListSchema.parse((await owner.get(`/api/systems/${system.id}/measurements`)).body).items;
+    const items = MeasurementListSchema.parse(
+      (await owner.get(`/api/systems/${system.id}/measurements`)).body,
+    ).items;
     expect(items.map((m) => m.id)).toEqual([second.id]);
   });
 });

@@ -6,7 +6,13 @@
  */
 import type { Express } from 'express';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { CalibrationSchema, CurrentCalibrationSchema, MeasurementComparisonSchema, MeasurementSchema, type Calibration } from '../../shared/contracts/measurements';
+import {
+  CalibrationSchema,
+  CurrentCalibrationSchema,
+  MeasurementComparisonSchema,
+  MeasurementSchema,
+  type Calibration,
+} from '../../shared/contracts/measurements';
 import { RunSchema } from '../../shared/contracts/runs';
 import { SystemSchema, type System } from '../../shared/contracts/systems';
 import { EXAMPLE_SCENARIO_FILE } from '../../shared/scenario/index';
@@ -44,7 +50,10 @@ describe('calibration against a log made with known coefficients', () => {
     const ctx = { ...t.ctx, runPool: pool };
     app = createApp(ctx);
     owner = (await signedInClient(app, ctx, { name: 'Cal Ibrator' })).client;
-    system = SystemSchema.parse((await owner.post('/api/systems').send({ name: 'Bench', scenario: EXAMPLE_SCENARIO_FILE })).body);
+    system = SystemSchema.parse(
+      (await owner.post('/api/systems').send({ name: 'Bench', scenario: EXAMPLE_SCENARIO_FILE }))
+        .body,
+    );
   });
   afterEach(async () => {
     await pool.close();
@@ -65,8 +74,15 @@ describe('calibration against a log made with known coefficients', () => {
       mountingHeightM: 0.4,
       seed: 2024,
     });
-    const options = { time: { column: 'time', timeZone: 'Europe/Lisbon' }, level: { kind: 'distance', column: 'distance_mm', unit: 'mm', mountingHeight: '400 mm' }, bed: 'bed-a' };
-    const res = await owner.post(`/api/systems/${system.id}/measurements`).field('options', JSON.stringify(options)).attach('file', Buffer.from(csv), 'bench.csv');
+    const options = {
+      time: { column: 'time', timeZone: 'Europe/Lisbon' },
+      level: { kind: 'distance', column: 'distance_mm', unit: 'mm', mountingHeight: '400 mm' },
+      bed: 'bed-a',
+    };
+    const res = await owner
+      .post(`/api/systems/${system.id}/measurements`)
+      .field('options', JSON.stringify(options))
+      .attach('file', Buffer.from(csv), 'bench.csv');
     expect(res.status, JSON.stringify(res.body)).toBe(201);
     return MeasurementSchema.parse(res.body).id;
   }
@@ -86,25 +102,38 @@ describe('calibration against a log made with known coefficients', () => {
       const parameter = calibration.parameters.find((p) => p.key === key);
       expect(parameter?.standardError, key).toBeGreaterThan(0);
     }
-    expect(calibration.fit.chiSquareAfter).toBeLessThan((calibration.fit.chiSquareBefore ?? 0) / 100);
+    expect(calibration.fit.chiSquareAfter).toBeLessThan(
+      (calibration.fit.chiSquareBefore ?? 0) / 100,
+    );
     const drain = calibration.fit.residuals.find((r) => r.metric === 'drain');
     expect(Math.abs(drain?.normalised ?? 99)).toBeLessThan(1);
     expect(Math.abs((drain?.before ?? 0) - (drain?.measured ?? 0))).toBeGreaterThan(60);
 
-    const current = CurrentCalibrationSchema.parse((await owner.get(`/api/systems/${system.id}/calibration`)).body).calibration;
-    expect(current).toMatchObject({ calibrationId: calibration.id, appliedBy: { name: 'Cal Ibrator' } });
+    const current = CurrentCalibrationSchema.parse(
+      (await owner.get(`/api/systems/${system.id}/calibration`)).body,
+    ).calibration;
+    expect(current).toMatchObject({
+      calibrationId: calibration.id,
+      appliedBy: { name: 'Cal Ibrator' },
+    });
     expect(Date.now() - Date.parse(current?.appliedAt ?? '')).toBeLessThan(120_000);
     const stored = SystemSchema.parse((await owner.get(`/api/systems/${system.id}`)).body);
     const calibrated = applyCalibration(exampleScenario(), stored.calibration);
     const bed = calibrated.vessels.find((v) => v.id === 'bed-a');
-    expect(bed?.kind === 'bed' && bed.drain.type === 'bell-siphon' && bed.drain.primingCoefficient).toBeCloseTo(fitted(calibration, 'primingCoefficient'), 12);
+    expect(
+      bed?.kind === 'bed' && bed.drain.type === 'bell-siphon' && bed.drain.primingCoefficient,
+    ).toBeCloseTo(fitted(calibration, 'primingCoefficient'), 12);
     expect(calibrated.pumps[0]?.flowScale).toBeCloseTo(fitted(calibration, 'flowScale'), 12);
   });
 
   it('compares the log with a run of the uncalibrated system, aligned on a priming', async () => {
     const measurementId = await uploadLog();
-    const run = RunSchema.parse((await owner.post(`/api/systems/${system.id}/runs`).send({ duration: '2 h' })).body);
-    const res = await owner.get(`/api/measurements/${measurementId}/compare`).query({ run: run.id });
+    const run = RunSchema.parse(
+      (await owner.post(`/api/systems/${system.id}/runs`).send({ duration: '2 h' })).body,
+    );
+    const res = await owner
+      .get(`/api/measurements/${measurementId}/compare`)
+      .query({ run: run.id });
     expect(res.status, JSON.stringify(res.body)).toBe(200);
     const comparison = MeasurementComparisonSchema.parse(res.body);
     expect(comparison.bed).toBe('bed-a');
@@ -115,9 +144,13 @@ describe('calibration against a log made with known coefficients', () => {
     expect(comparison.simulated.cycles).toBeGreaterThanOrEqual(5);
     // After the shift, the measured peak of the first complete cycle sits on the run's second
     // priming (its first steady cycle).
-    const primes = (run.events ?? []).filter((e) => e.kind === 'primed' && e.where === 'bed-a').map((e) => e.t_s);
+    const primes = (run.events ?? [])
+      .filter((e) => e.kind === 'primed' && e.where === 'bed-a')
+      .map((e) => e.t_s);
     const secondPrime = primes[1] ?? Number.NaN;
-    const near = (comparison.measuredSeries?.t_s ?? []).map((t, i) => ({ t, y: comparison.measuredSeries?.level_m[i] ?? 0 })).filter((p) => Math.abs(p.t - secondPrime) < 120);
+    const near = (comparison.measuredSeries?.t_s ?? [])
+      .map((t, i) => ({ t, y: comparison.measuredSeries?.level_m[i] ?? 0 }))
+      .filter((p) => Math.abs(p.t - secondPrime) < 120);
     expect(near.length).toBeGreaterThan(50);
     const peak = near.reduce((a, b) => (b.y > a.y ? b : a));
     expect(Math.abs(peak.t - secondPrime)).toBeLessThan(6);

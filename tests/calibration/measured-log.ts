@@ -5,7 +5,10 @@
  */
 import { simulate } from '../../engine/index';
 import { EXAMPLE_SCENARIO_FILE, parseScenario, type Scenario } from '../../shared/scenario/index';
-import { withCoefficients, type CoefficientValue } from '../../server/measurements/with-coefficients';
+import {
+  withCoefficients,
+  type CoefficientValue,
+} from '../../server/measurements/with-coefficients';
 
 /** The example scenario, normalised. */
 export function exampleScenario(): Scenario {
@@ -47,7 +50,10 @@ function lisbonSummer(epochMs: number): string {
 /** The CSV text and the truth run's bed-a cycle figures (from its summary). */
 export function measuredLog(spec: LogSpec): { csv: string; truthScenario: Scenario } {
   const truthScenario = withCoefficients(exampleScenario(), spec.truth);
-  const outcome = simulate(truthScenario, { durationS: spec.skipS + spec.durationS, outputIntervalS: spec.intervalS });
+  const outcome = simulate(truthScenario, {
+    durationS: spec.skipS + spec.durationS,
+    outputIntervalS: spec.intervalS,
+  });
   const channel = outcome.result.series.channels.find((c) => c.id === 'level:bed-a');
   if (!channel) throw new Error('The simulation has no level:bed-a channel.');
   const noise = gaussian(spec.seed);
@@ -56,7 +62,8 @@ export function measuredLog(spec: LogSpec): { csv: string; truthScenario: Scenar
   outcome.result.series.t_s.forEach((t, i) => {
     const onGrid = Math.abs(t / spec.intervalS - Math.round(t / spec.intervalS)) < 1e-9;
     if (!onGrid || t < spec.skipS) return;
-    const distanceMm = (spec.mountingHeightM - (channel.values[i] ?? 0) - spec.noiseM * noise()) * 1000;
+    const distanceMm =
+      (spec.mountingHeightM - (channel.values[i] ?? 0) - spec.noiseM * noise()) * 1000;
     lines.push(`${lisbonSummer(start + (t - spec.skipS) * 1000)},${distanceMm.toFixed(1)},3.71`);
   });
   return { csv: `${lines.join('\n')}\n`, truthScenario };

@@ -14,22 +14,41 @@ export interface FitChoice {
  * outlet into a measured bed: the flow scale. Each starts from the scenario's current value
  * (which already carries the applied calibration).
  */
-export function calibrationParameters(scenario: Scenario, beds: readonly string[], choice: FitChoice): ParameterSpec[] {
+export function calibrationParameters(
+  scenario: Scenario,
+  beds: readonly string[],
+  choice: FitChoice,
+): ParameterSpec[] {
   const specs: ParameterSpec[] = [];
   for (const id of beds) {
     const bed = scenario.vessels.find((v) => v.id === id);
     if (bed?.kind !== 'bed') continue;
     if (choice.primingCoefficient && bed.drain.type === 'bell-siphon') {
-      specs.push({ key: 'primingCoefficient', target: id, initial: bed.drain.primingCoefficient, ...PARAMETER_BOUNDS.primingCoefficient });
+      specs.push({
+        key: 'primingCoefficient',
+        target: id,
+        initial: bed.drain.primingCoefficient,
+        ...PARAMETER_BOUNDS.primingCoefficient,
+      });
     }
     if (choice.dischargeLossMultiplier) {
-      specs.push({ key: 'dischargeLossMultiplier', target: id, initial: bed.drain.dischargeLossMultiplier, ...PARAMETER_BOUNDS.dischargeLossMultiplier });
+      specs.push({
+        key: 'dischargeLossMultiplier',
+        target: id,
+        initial: bed.drain.dischargeLossMultiplier,
+        ...PARAMETER_BOUNDS.dischargeLossMultiplier,
+      });
     }
   }
   if (choice.flowScale) {
     for (const pump of scenario.pumps) {
       if (pump.outlets.some((o) => beds.includes(o.to))) {
-        specs.push({ key: 'flowScale', target: pump.id, initial: pump.flowScale, ...PARAMETER_BOUNDS.flowScale });
+        specs.push({
+          key: 'flowScale',
+          target: pump.id,
+          initial: pump.flowScale,
+          ...PARAMETER_BOUNDS.flowScale,
+        });
       }
     }
   }

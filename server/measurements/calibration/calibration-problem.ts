@@ -3,7 +3,10 @@
  * flow scale per pump feeding one), against measured cycle figures with their uncertainties.
  * Plain data, so it crosses to a worker thread as is.
  */
-import type { CalibrationParameterKey, CalibrationResidual } from '../../../shared/contracts/measurements';
+import type {
+  CalibrationParameterKey,
+  CalibrationResidual,
+} from '../../../shared/contracts/measurements';
 import type { Scenario } from '../../../shared/scenario/index';
 
 /** One coefficient to fit, with its start value and bounds (the fit works on its logarithm). */
@@ -54,7 +57,9 @@ export interface FitLimits {
  * Bounds of each coefficient. k_p: 0.05–5 (the drain-stack analogy gives 0.5–0.9; far outside
  * it the bed stalls or primes at once); loss multiplier 0.1–20; pump flow scale 0.2–3.
  */
-export const PARAMETER_BOUNDS: Readonly<Record<CalibrationParameterKey, { lower: number; upper: number }>> = {
+export const PARAMETER_BOUNDS: Readonly<
+  Record<CalibrationParameterKey, { lower: number; upper: number }>
+> = {
   primingCoefficient: { lower: 0.05, upper: 5 },
   dischargeLossMultiplier: { lower: 0.1, upper: 20 },
   flowScale: { lower: 0.2, upper: 3 },

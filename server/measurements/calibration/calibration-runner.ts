@@ -22,12 +22,22 @@ function spawnWorker(entry: URL): Worker {
   return new Worker(code, { eval: true, execArgv: [] });
 }
 
-function runInWorker(entry: URL, problem: CalibrationProblem, limits: FitLimits): Promise<FitOutcome> {
+function runInWorker(
+  entry: URL,
+  problem: CalibrationProblem,
+  limits: FitLimits,
+): Promise<FitOutcome> {
   return new Promise((resolve, reject) => {
     const worker = spawnWorker(entry);
     const timer = setTimeout(() => {
       void worker.terminate();
-      reject(new HttpError(503, 'CALIBRATION_TIMEOUT', 'The calibration did not finish in time; fit fewer coefficients or use a shorter log.'));
+      reject(
+        new HttpError(
+          503,
+          'CALIBRATION_TIMEOUT',
+          'The calibration did not finish in time; fit fewer coefficients or use a shorter log.',
+        ),
+      );
     }, limits.deadlineMs + GRACE_MS);
     const finish = (): void => {
       clearTimeout(timer);
@@ -59,11 +69,19 @@ export class CalibrationRunner {
   /** Fits `problem` when the fits before it are done; 503 when too many are waiting. */
   async fit(problem: CalibrationProblem, limits: FitLimits): Promise<FitOutcome> {
     if (this.waiting >= this.maxWaiting) {
-      throw new HttpError(503, 'CALIBRATION_BUSY', 'Other calibrations are running; try again in a minute.', undefined, { 'Retry-After': '60' });
+      throw new HttpError(
+        503,
+        'CALIBRATION_BUSY',
+        'Other calibrations are running; try again in a minute.',
+        undefined,
+        { 'Retry-After': '60' },
+      );
     }
     this.waiting++;
     const previous = this.running;
-    const mine = previous.catch(() => undefined).then(() => runInWorker(this.entry, problem, limits));
+    const mine = previous
+      .catch(() => undefined)
+      .then(() => runInWorker(this.entry, problem, limits));
     this.running = mine.catch(() => undefined);
     try {
       return await mine;

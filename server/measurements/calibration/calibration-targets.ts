@@ -17,7 +17,10 @@ export type LoadedMeasurement =
  * cycles (a logged bed needs two located drains, i.e. one full flood between them). Series of
  * tanks and sumps are not used.
  */
-export function calibrationTargets(scenario: Scenario, measurements: readonly LoadedMeasurement[]): BedTarget[] {
+export function calibrationTargets(
+  scenario: Scenario,
+  measurements: readonly LoadedMeasurement[],
+): BedTarget[] {
   const beds = new Set(scenario.vessels.filter((v) => v.kind === 'bed').map((v) => v.id));
   const targets: BedTarget[] = [];
   for (const m of measurements) {
@@ -25,11 +28,21 @@ export function calibrationTargets(scenario: Scenario, measurements: readonly Lo
       for (const series of m.series.beds) {
         if (!beds.has(series.bed)) continue;
         const cycles = detectLevelCycles(series.t_s, series.level_m);
-        if (cycles.length >= 2) targets.push({ measurementId: m.id, bed: series.bed, figures: measuredTargets(cycleSpreads(cycles), 'csv') });
+        if (cycles.length >= 2)
+          targets.push({
+            measurementId: m.id,
+            bed: series.bed,
+            figures: measuredTargets(cycleSpreads(cycles), 'csv'),
+          });
       }
     } else {
       for (const bed of new Set(m.entries.map((e) => e.bed))) {
-        if (beds.has(bed)) targets.push({ measurementId: m.id, bed, figures: measuredTargets(stopwatchSpreads(m.entries, bed), 'stopwatch') });
+        if (beds.has(bed))
+          targets.push({
+            measurementId: m.id,
+            bed,
+            figures: measuredTargets(stopwatchSpreads(m.entries, bed), 'stopwatch'),
+          });
       }
     }
   }

@@ -9,4 +9,5 @@ export interface CalibrationJobMessage {
 }
 
 /** Worker → main: the outcome, or the error that stopped the fit. */
-export type CalibrationWorkerMessage = { type: 'done'; outcome: FitOutcome } | { type: 'error'; message: string };
+export type CalibrationWorkerMessage =
+  { type: 'done'; outcome: FitOutcome } | { type: 'error'; message: string };

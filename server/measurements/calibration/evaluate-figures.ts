@@ -27,7 +27,10 @@ export interface Evaluation {
   chiSquare: number;
 }
 
-function simulatedFigure(spreads: CycleSpreads | null | undefined, metric: FigureTarget['metric']): number | null {
+function simulatedFigure(
+  spreads: CycleSpreads | null | undefined,
+  metric: FigureTarget['metric'],
+): number | null {
   return spreads?.[metric]?.mean ?? null;
 }
 
@@ -61,13 +64,23 @@ export class FigureEvaluator {
     const key = logValues.map((v) => Math.round(v * 1e6)).join(',');
     const cached = this.cache.get(key);
     if (cached) return cached;
-    if (this.evaluations >= this.limits.maxEvaluations || this.now() - this.startedAt > this.limits.deadlineMs) throw new FitBudgetExceeded();
+    if (
+      this.evaluations >= this.limits.maxEvaluations ||
+      this.now() - this.startedAt > this.limits.deadlineMs
+    )
+      throw new FitBudgetExceeded();
     this.evaluations++;
-    const values = this.problem.parameters.map((p, i) => ({ key: p.key, target: p.target, value: Math.exp(logValues[i] ?? 0) }));
+    const values = this.problem.parameters.map((p, i) => ({
+      key: p.key,
+      target: p.target,
+      value: Math.exp(logValues[i] ?? 0),
+    }));
     const scenario = withCoefficients(this.problem.scenario, values);
     const { spreads, durationS } = modelSpreads(this.simulate, scenario, this.beds, this.durationS);
     this.durationS = Math.max(this.durationS, durationS);
-    const simulated = this.problem.targets.map((t) => t.figures.map((f) => simulatedFigure(spreads.get(t.bed), f.metric)));
+    const simulated = this.problem.targets.map((t) =>
+      t.figures.map((f) => simulatedFigure(spreads.get(t.bed), f.metric)),
+    );
     const residuals: number[] = [];
     this.problem.targets.forEach((t, ti) =>
       t.figures.forEach((f, fi) => {
@@ -76,7 +89,12 @@ export class FigureEvaluator {
         residuals.push(sim === null ? MISSING_FIGURE_RESIDUAL : (sim - f.measured) / f.sigma);
       }),
     );
-    const evaluation = { logValues: [...logValues], simulated, residuals, chiSquare: residuals.reduce((s, r) => s + r * r, 0) };
+    const evaluation = {
+      logValues: [...logValues],
+      simulated,
+      residuals,
+      chiSquare: residuals.reduce((s, r) => s + r * r, 0),
+    };
     this.cache.set(key, evaluation);
     return evaluation;
   }

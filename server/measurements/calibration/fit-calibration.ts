@@ -32,7 +32,13 @@ const STALL_ITERATIONS = 3;
 const STALL_GAIN = 1e-6;
 
 /** Runs the library's iterations; whether the budget ran out, and how many iterations were made. */
-function runLevenbergMarquardt(problem: CalibrationProblem, evaluator: FigureEvaluator, start: number[], maxIterations: number, m: number): { outOfBudget: boolean; iterations: number } {
+function runLevenbergMarquardt(
+  problem: CalibrationProblem,
+  evaluator: FigureEvaluator,
+  start: number[],
+  maxIterations: number,
+  m: number,
+): { outOfBudget: boolean; iterations: number } {
   const x = Array.from({ length: m }, (_, i) => i);
   const n = start.length;
   let calls = 0;
@@ -41,25 +47,30 @@ function runLevenbergMarquardt(problem: CalibrationProblem, evaluator: FigureEva
   const bestByIteration: number[] = [];
   const bestChiSquare = (): number => Math.min(...evaluator.all().map((e) => e.chiSquare));
   try {
-    const result = levenbergMarquardt({ x, y: new Array<number>(m).fill(0) }, (p) => {
-      calls++;
-      if ((calls - 1) % (n + 2) === 0 && calls > 1) {
-        bestByIteration.push(bestChiSquare());
-        const earlier = bestByIteration.at(-1 - STALL_ITERATIONS);
-        const latest = bestByIteration.at(-1) ?? 0;
-        if (earlier !== undefined && earlier - latest <= STALL_GAIN * earlier) throw new FitStalled();
-      }
-      const residuals = evaluator.evaluate(p).residuals;
-      return (i) => residuals[i] ?? 0;
-    }, {
-      initialValues: start,
-      minValues: problem.parameters.map((p) => Math.log(p.lower)),
-      maxValues: problem.parameters.map((p) => Math.log(p.upper)),
-      gradientDifference: GRADIENT_STEP,
-      damping: 1e-2,
-      maxIterations,
-      errorTolerance: 1e-12,
-    });
+    const result = levenbergMarquardt(
+      { x, y: new Array<number>(m).fill(0) },
+      (p) => {
+        calls++;
+        if ((calls - 1) % (n + 2) === 0 && calls > 1) {
+          bestByIteration.push(bestChiSquare());
+          const earlier = bestByIteration.at(-1 - STALL_ITERATIONS);
+          const latest = bestByIteration.at(-1) ?? 0;
+          if (earlier !== undefined && earlier - latest <= STALL_GAIN * earlier)
+            throw new FitStalled();
+        }
+        const residuals = evaluator.evaluate(p).residuals;
+        return (i) => residuals[i] ?? 0;
+      },
+      {
+        initialValues: start,
+        minValues: problem.parameters.map((p) => Math.log(p.lower)),
+        maxValues: problem.parameters.map((p) => Math.log(p.upper)),
+        gradientDifference: GRADIENT_STEP,
+        damping: 1e-2,
+        maxIterations,
+        errorTolerance: 1e-12,
+      },
+    );
     return { outOfBudget: false, iterations: result.iterations };
   } catch (error) {
     if (error instanceof FitBudgetExceeded) return { outOfBudget: true, iterations: iterations() };
@@ -84,7 +95,11 @@ function jacobianAt(evaluator: FigureEvaluator, best: Evaluation): number[][] | 
   return best.residuals.map((_, i) => columns.map((c) => c[i] ?? 0));
 }
 
-function residualRows(problem: CalibrationProblem, before: Evaluation, after: Evaluation): CalibrationResidual[] {
+function residualRows(
+  problem: CalibrationProblem,
+  before: Evaluation,
+  after: Evaluation,
+): CalibrationResidual[] {
   return problem.targets.flatMap((t, ti) =>
     t.figures.map((f, fi) => {
       const simulatedAfter = after.simulated[ti]?.[fi] ?? null;
@@ -104,23 +119,50 @@ function residualRows(problem: CalibrationProblem, before: Evaluation, after: Ev
   );
 }
 
-function judge(best: Evaluation, uncertainty: Uncertainty | null, outOfBudget: boolean): Pick<CalibrationFit, 'status' | 'message'> {
+function judge(
+  best: Evaluation,
+  uncertainty: Uncertainty | null,
+  outOfBudget: boolean,
+): Pick<CalibrationFit, 'status' | 'message'> {
   if (best.residuals.some((r) => Math.abs(r) >= 1e4)) {
-    return { status: 'failed', message: 'The model did not cycle for any coefficients tried; check the system against the real one (pump, standpipe, bell) first.' };
+    return {
+      status: 'failed',
+      message:
+        'The model did not cycle for any coefficients tried; check the system against the real one (pump, standpipe, bell) first.',
+    };
   }
   const step = uncertainty?.step;
   if (best.chiSquare < 1e-12 || (step && step.every((d) => Math.abs(d) < CONVERGED_STEP))) {
-    return { status: 'converged', message: 'Converged: a further step would change no coefficient by more than 0.1 %.' };
+    return {
+      status: 'converged',
+      message: 'Converged: a further step would change no coefficient by more than 0.1 %.',
+    };
   }
-  if (outOfBudget) return { status: 'time-limit', message: 'Stopped at the time or simulation limit; the best coefficients found so far are shown.' };
-  return { status: 'max-iterations', message: 'Stopped at the iteration limit before the coefficients settled; the best found so far are shown.' };
+  if (outOfBudget)
+    return {
+      status: 'time-limit',
+      message:
+        'Stopped at the time or simulation limit; the best coefficients found so far are shown.',
+    };
+  return {
+    status: 'max-iterations',
+    message:
+      'Stopped at the iteration limit before the coefficients settled; the best found so far are shown.',
+  };
 }
 
 /** Runs the fit; `now` is a clock in ms (the deadline counts from the first call). */
-export function fitCalibration(problem: CalibrationProblem, simulate: SimulateFn, limits: FitLimits, now: () => number): FitOutcome {
+export function fitCalibration(
+  problem: CalibrationProblem,
+  simulate: SimulateFn,
+  limits: FitLimits,
+  now: () => number,
+): FitOutcome {
   const startedAt = now();
   const evaluator = new FigureEvaluator(problem, simulate, limits, now, startedAt);
-  const start = problem.parameters.map((p) => Math.log(Math.min(p.upper, Math.max(p.lower, p.initial))));
+  const start = problem.parameters.map((p) =>
+    Math.log(Math.min(p.upper, Math.max(p.lower, p.initial))),
+  );
   const before = evaluator.evaluate(start);
   const m = before.residuals.length;
   const run = runLevenbergMarquardt(problem, evaluator, start, limits.maxIterations, m);

@@ -19,11 +19,24 @@ describe('invertMatrix', () => {
   });
 
   it('needs a pivot swap for a zero on the diagonal', () => {
-    expect(invertMatrix([[0, 2], [3, 0]])).toEqual([[0, 1 / 3], [0.5, 0]]);
+    expect(
+      invertMatrix([
+        [0, 2],
+        [3, 0],
+      ]),
+    ).toEqual([
+      [0, 1 / 3],
+      [0.5, 0],
+    ]);
   });
 
   it('returns null for a singular matrix', () => {
-    expect(invertMatrix([[1, 2], [2, 4]])).toBeNull();
+    expect(
+      invertMatrix([
+        [1, 2],
+        [2, 4],
+      ]),
+    ).toBeNull();
     expect(invertMatrix([[0]])).toBeNull();
   });
 });

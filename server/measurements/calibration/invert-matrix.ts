@@ -7,12 +7,16 @@
  */
 export function invertMatrix(a: readonly (readonly number[])[]): number[][] | null {
   const n = a.length;
-  const m = a.map((row, i) => [...row.slice(0, n), ...Array.from({ length: n }, (_, j) => (i === j ? 1 : 0))]);
+  const m = a.map((row, i) => [
+    ...row.slice(0, n),
+    ...Array.from({ length: n }, (_, j) => (i === j ? 1 : 0)),
+  ]);
   const scale = Math.max(...a.flatMap((row) => row.map(Math.abs)), 0);
   if (scale === 0) return null;
   for (let col = 0; col < n; col++) {
     let pivot = col;
-    for (let r = col + 1; r < n; r++) if (Math.abs(m[r]?.[col] ?? 0) > Math.abs(m[pivot]?.[col] ?? 0)) pivot = r;
+    for (let r = col + 1; r < n; r++)
+      if (Math.abs(m[r]?.[col] ?? 0) > Math.abs(m[pivot]?.[col] ?? 0)) pivot = r;
     const pivotRow = m[pivot];
     const here = m[col];
     if (!pivotRow || !here || Math.abs(pivotRow[col] ?? 0) < 1e-14 * scale) return null;

@@ -11,7 +11,9 @@ export type FigureSource = 'csv' | 'stopwatch';
  * times, 0.5 mm on marks. A stopwatch and a ruler: 1 s + 2 % and 3 mm (human reaction time and
  * reading a wet mark; common practice, no source).
  */
-const FLOORS: Readonly<Record<FigureSource, { timeS: number; timeFraction: number; levelM: number }>> = {
+const FLOORS: Readonly<
+  Record<FigureSource, { timeS: number; timeFraction: number; levelM: number }>
+> = {
   csv: { timeS: 0.5, timeFraction: 0.005, levelM: 0.0005 },
   stopwatch: { timeS: 1, timeFraction: 0.02, levelM: 0.003 },
 };
@@ -27,11 +29,23 @@ function sigmaOf(spread: Spread, floor: number): number {
  */
 export function measuredTargets(spreads: CycleSpreads, source: FigureSource): FigureTarget[] {
   const floor = FLOORS[source];
-  const time = (spread: Spread): number => sigmaOf(spread, floor.timeS + floor.timeFraction * spread.mean);
+  const time = (spread: Spread): number =>
+    sigmaOf(spread, floor.timeS + floor.timeFraction * spread.mean);
   const figures: FigureTarget[] = [];
-  const add = (metric: FigureTarget['metric'], spread: Spread | null, unit: 's' | 'm', fitted: boolean): void => {
+  const add = (
+    metric: FigureTarget['metric'],
+    spread: Spread | null,
+    unit: 's' | 'm',
+    fitted: boolean,
+  ): void => {
     if (!spread) return;
-    figures.push({ metric, unit, measured: spread.mean, sigma: unit === 's' ? time(spread) : sigmaOf(spread, floor.levelM), fitted });
+    figures.push({
+      metric,
+      unit,
+      measured: spread.mean,
+      sigma: unit === 's' ? time(spread) : sigmaOf(spread, floor.levelM),
+      fitted,
+    });
   };
   add('flood', spreads.flood, 's', true);
   add('drain', spreads.drain, 's', true);

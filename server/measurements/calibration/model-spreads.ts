@@ -13,7 +13,10 @@ export type BedSpreads = Map<string, CycleSpreads | null>;
 /** Longest simulated time one evaluation may grow to, s. */
 const MAX_DURATION_S = 48 * 3600;
 
-function spreadsOf(outcome: SimulationOutcome, beds: readonly string[]): { spreads: BedSpreads; short: boolean } {
+function spreadsOf(
+  outcome: SimulationOutcome,
+  beds: readonly string[],
+): { spreads: BedSpreads; short: boolean } {
   const spreads: BedSpreads = new Map();
   let short = false;
   for (const bed of beds) {
@@ -44,9 +47,13 @@ export function modelSpreads(
 ): { spreads: BedSpreads; durationS: number } {
   let duration = Math.min(durationS, MAX_DURATION_S);
   for (let attempt = 0; ; attempt++) {
-    const outcome = simulate(scenario, { durationS: duration, outputIntervalS: Math.max(scenario.run.outputInterval, duration / 40) });
+    const outcome = simulate(scenario, {
+      durationS: duration,
+      outputIntervalS: Math.max(scenario.run.outputInterval, duration / 40),
+    });
     const { spreads, short } = spreadsOf(outcome, beds);
-    if (!short || attempt >= 2 || duration >= MAX_DURATION_S || outcome.status === 'failed') return { spreads, durationS: duration };
+    if (!short || attempt >= 2 || duration >= MAX_DURATION_S || outcome.status === 'failed')
+      return { spreads, durationS: duration };
     duration = Math.min(duration * 2, MAX_DURATION_S);
   }
 }

@@ -14,11 +14,20 @@ export interface Uncertainty {
  * parameters is (JᵀJ)⁻¹·s², s² = χ²/(m − n) when m > n (the residuals' own scatter), else 1
  * (the stated uncertainties taken as they are) — Press et al., Numerical Recipes, 3rd ed., §15.5.
  */
-export function parameterUncertainty(jacobian: readonly (readonly number[])[], residuals: readonly number[]): Uncertainty {
+export function parameterUncertainty(
+  jacobian: readonly (readonly number[])[],
+  residuals: readonly number[],
+): Uncertainty {
   const n = jacobian[0]?.length ?? 0;
   const m = jacobian.length;
-  const jtj = Array.from({ length: n }, (_, a) => Array.from({ length: n }, (_, b) => jacobian.reduce((s, row) => s + (row[a] ?? 0) * (row[b] ?? 0), 0)));
-  const jtr = Array.from({ length: n }, (_, a) => jacobian.reduce((s, row, i) => s + (row[a] ?? 0) * (residuals[i] ?? 0), 0));
+  const jtj = Array.from({ length: n }, (_, a) =>
+    Array.from({ length: n }, (_, b) =>
+      jacobian.reduce((s, row) => s + (row[a] ?? 0) * (row[b] ?? 0), 0),
+    ),
+  );
+  const jtr = Array.from({ length: n }, (_, a) =>
+    jacobian.reduce((s, row, i) => s + (row[a] ?? 0) * (residuals[i] ?? 0), 0),
+  );
   const inverse = invertMatrix(jtj);
   if (!inverse) return { logStandardErrors: Array.from({ length: n }, () => null), step: null };
   const chiSquare = residuals.reduce((s, r) => s + r * r, 0);
