@@ -44,6 +44,8 @@ export class LiveVerdict {
   readonly system = input<UnitSystem>('metric');
   /** True when `answer` covers the whole run duration (not a short live check). */
   readonly whole = input(false);
+  /** True while the whole duration is being simulated (it can then be cancelled). */
+  readonly wholeBusy = input(false);
   /** The whole run's simulated duration, s. */
   readonly fullDurationS = input(0);
   /** Asks for the whole duration to be simulated in the browser. */
