@@ -10,6 +10,7 @@ const scenario = parsed.scenario;
 const scene = buildCrossSectionScene(scenario);
 const bed = scene.beds.find((b) => b.id === 'bed-north');
 if (!bed || bed.drain.type !== 'bell-siphon') throw new Error('bed-north lost its bell siphon');
+const bellDrain = bed.drain;
 const G = 9.80665;
 
 function reader(levelM: number, drainM3PerS: number, sumpLevelM = 0.3) {
@@ -80,7 +81,7 @@ describe('explainPhase', () => {
   it('gives the priming flow k_p·√(g·D⁵) and the break level', () => {
     const priming = explain('priming', reader(0.26, 2e-4));
     const prime =
-      bed.drain.primingCoefficient * Math.sqrt(G * bed.drain.standpipe.innerDiameter ** 5);
+      bellDrain.primingCoefficient * Math.sqrt(G * bed.drain.standpipe.innerDiameter ** 5);
     expect(priming.substituted).toMatch(
       new RegExp(`= ${Number((prime * 60000).toPrecision(3))} L/min$`),
     );
