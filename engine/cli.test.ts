@@ -9,7 +9,11 @@ const work = mkdtempSync(join(tmpdir(), 'tidewright-cli-'));
 afterAll(() => rmSync(work, { recursive: true, force: true }));
 
 function cli(...args: string[]) {
-  const result = spawnSync(process.execPath, ['--import', 'tsx', join(root, 'engine/cli.ts'), ...args], { cwd: root, encoding: 'utf8', timeout: 60_000 });
+  const result = spawnSync(
+    process.execPath,
+    ['--import', 'tsx', join(root, 'engine/cli.ts'), ...args],
+    { cwd: root, encoding: 'utf8', timeout: 60_000 },
+  );
   return { status: result.status, stdout: result.stdout, stderr: result.stderr };
 }
 
@@ -25,9 +29,26 @@ describe('npm run simulate', { timeout: 120_000 }, () => {
   it('prints one JSON object with the documented fields for --json', () => {
     const run = cli('scenarios/stalling-siphon.json', '--json', '--duration', '1 h');
     expect(run.status).toBe(0);
-    const result = JSON.parse(run.stdout) as Record<string, unknown> & { summary: { beds: Array<Record<string, unknown>> }; stats: Record<string, number>; events: Array<{ kind: string }> };
-    expect(Object.keys(result)).toEqual(expect.arrayContaining(['summary', 'events', 'verdicts', 'massBalanceError', 'stats']));
-    expect(Object.keys(result.summary.beds[0] ?? {})).toEqual(expect.arrayContaining(['id', 'cycles', 'periodMean_s', 'floodMean_s', 'drainMean_s', 'highLevel_m', 'lowLevel_m', 'state']));
+    const result = JSON.parse(run.stdout) as Record<string, unknown> & {
+      summary: { beds: Array<Record<string, unknown>> };
+      stats: Record<string, number>;
+      events: Array<{ kind: string }>;
+    };
+    expect(Object.keys(result)).toEqual(
+      expect.arrayContaining(['summary', 'events', 'verdicts', 'massBalanceError', 'stats']),
+    );
+    expect(Object.keys(result.summary.beds[0] ?? {})).toEqual(
+      expect.arrayContaining([
+        'id',
+        'cycles',
+        'periodMean_s',
+        'floodMean_s',
+        'drainMean_s',
+        'highLevel_m',
+        'lowLevel_m',
+        'state',
+      ]),
+    );
     expect(result.summary.beds[0]?.['state']).toBe('spill-stall');
     expect(result.events.some((e) => e.kind === 'spill-stall')).toBe(true);
     expect(result.stats['wall_ms']).toBeGreaterThan(0);
@@ -45,8 +66,11 @@ describe('npm run simulate', { timeout: 120_000 }, () => {
   });
 
   it('exits 2 with each problem and its field path on stderr, and no stack trace, for an invalid scenario', () => {
-    const bad = JSON.parse(readFileSync(join(root, 'scenarios/tabletop-classroom.json'), 'utf8')) as { vessels: Array<Record<string, unknown>> };
-    (bad.vessels[1] as { drain: { standpipe: { height: string } } }).drain.standpipe.height = '0.5 m';
+    const bad = JSON.parse(
+      readFileSync(join(root, 'scenarios/tabletop-classroom.json'), 'utf8'),
+    ) as { vessels: Array<Record<string, unknown>> };
+    (bad.vessels[1] as { drain: { standpipe: { height: string } } }).drain.standpipe.height =
+      '0.5 m';
     (bad.vessels[0] as Record<string, unknown>)['height'] = '2 kg';
     const file = join(work, 'bad.json');
     writeFileSync(file, JSON.stringify(bad));

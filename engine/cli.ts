@@ -24,7 +24,8 @@ interface CliArguments {
   out?: string;
 }
 
-const USAGE = 'Usage: npm run simulate -- <scenario.json> [--json] [--duration <value>] [--out <series.csv>]';
+const USAGE =
+  'Usage: npm run simulate -- <scenario.json> [--json] [--duration <value>] [--out <series.csv>]';
 
 function parseArguments(argv: readonly string[]): CliArguments {
   const args: Partial<CliArguments> & { json: boolean } = { json: false };
@@ -39,12 +40,16 @@ function parseArguments(argv: readonly string[]): CliArguments {
       else {
         const parsed = parseQuantity(value, 'time', '--duration');
         if (!parsed.success) throw new InputError([`--duration: ${parsed.issue.message}`]);
-        if (!(parsed.value > 0)) throw new InputError(['--duration: the duration must be positive.']);
+        if (!(parsed.value > 0))
+          throw new InputError(['--duration: the duration must be positive.']);
         args.durationS = parsed.value;
       }
     } else if (arg.startsWith('--')) throw new InputError([`Unknown option ${arg}. ${USAGE}`]);
     else if (args.file === undefined) args.file = arg;
-    else throw new InputError([`Only one scenario file can be given (got "${args.file}" and "${arg}"). ${USAGE}`]);
+    else
+      throw new InputError([
+        `Only one scenario file can be given (got "${args.file}" and "${arg}"). ${USAGE}`,
+      ]);
   }
   if (args.file === undefined) throw new InputError([`No scenario file given. ${USAGE}`]);
   return { ...args, file: args.file };
@@ -55,16 +60,23 @@ function readScenario(file: string) {
   try {
     text = readFileSync(file, 'utf8');
   } catch (error) {
-    throw new InputError([`${file}: cannot read the file (${error instanceof Error ? error.message : String(error)}).`]);
+    throw new InputError([
+      `${file}: cannot read the file (${error instanceof Error ? error.message : String(error)}).`,
+    ]);
   }
   let document: unknown;
   try {
     document = JSON.parse(text);
   } catch (error) {
-    throw new InputError([`${file}: not valid JSON (${error instanceof Error ? error.message : String(error)}).`]);
+    throw new InputError([
+      `${file}: not valid JSON (${error instanceof Error ? error.message : String(error)}).`,
+    ]);
   }
   const parsed = parseScenario(document);
-  if (!parsed.success) throw new InputError(parsed.issues.map((issue) => `${issue.path || '(document)'}: ${issue.message}`));
+  if (!parsed.success)
+    throw new InputError(
+      parsed.issues.map((issue) => `${issue.path || '(document)'}: ${issue.message}`),
+    );
   return parsed.scenario;
 }
 
@@ -83,11 +95,14 @@ function run(argv: readonly string[]): number {
   if (args.out !== undefined) writeFileSync(args.out, seriesCsv(outcome.result.series));
   if (args.json) {
     const { series: _series, ...rest } = outcome.result;
-    process.stdout.write(`${JSON.stringify({ status: outcome.status, ...(outcome.reason && { reason: outcome.reason }), ...rest })}\n`);
+    process.stdout.write(
+      `${JSON.stringify({ status: outcome.status, ...(outcome.reason && { reason: outcome.reason }), ...rest })}\n`,
+    );
   } else {
     process.stdout.write(`${formatRunSummary(scenario.name, outcome)}\n`);
   }
-  if (outcome.status !== 'completed') process.stderr.write(`The run ${outcome.status}: ${outcome.reason ?? 'no reason given'}\n`);
+  if (outcome.status !== 'completed')
+    process.stderr.write(`The run ${outcome.status}: ${outcome.reason ?? 'no reason given'}\n`);
   return outcome.status === 'completed' ? 0 : 1;
 }
 
@@ -100,8 +115,11 @@ function main(): void {
       process.exitCode = 2;
       return;
     }
-    process.stderr.write(`Internal error: ${error instanceof Error ? error.message : String(error)}\n`);
-    if (process.env['TIDEWRIGHT_DEBUG'] && error instanceof Error) process.stderr.write(`${error.stack ?? ''}\n`);
+    process.stderr.write(
+      `Internal error: ${error instanceof Error ? error.message : String(error)}\n`,
+    );
+    if (process.env['TIDEWRIGHT_DEBUG'] && error instanceof Error)
+      process.stderr.write(`${error.stack ?? ''}\n`);
     process.exitCode = 1;
   }
 }

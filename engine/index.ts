@@ -3,6 +3,11 @@
  * from outside engine/.
  */
 export { simulate, ScenarioModelError } from './simulate';
+/**
+ * The hybrid ODE model of a scenario (derivative, event functions, mode switches), for
+ * verification and comparison tools such as the engine bench; applications call `simulate`.
+ */
+export { SystemModel } from './system/system-model';
 export type {
   BedState,
   BedSummary,

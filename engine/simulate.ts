@@ -1,6 +1,7 @@
 import type { Scenario } from '../shared/scenario';
 import type { TrajectoryObserver } from './integrator/hybrid-system';
-import { integrateHybrid, type IntegrateSettings } from './integrator/integrate-hybrid';
+import { integrateHybrid } from './integrator/integrate-hybrid';
+import type { IntegrateSettings } from './integrator/integrate-settings';
 import type { StepSegment } from './integrator/step-segment';
 import { BedCycleRecorder } from './results/bed-cycle-recorder';
 import { LevelExtremesTracker } from './results/level-extremes';
@@ -27,19 +28,34 @@ const MAX_STEP_S = 120;
  */
 export function simulate(scenario: Scenario, options: SimulateOptions = {}): SimulationOutcome {
   const durationS = options.durationS ?? scenario.run.duration;
-  if (!(durationS > 0) || !Number.isFinite(durationS)) throw new ScenarioModelError(`The duration must be a positive number of seconds (got ${durationS}).`);
+  if (!(durationS > 0) || !Number.isFinite(durationS))
+    throw new ScenarioModelError(
+      `The duration must be a positive number of seconds (got ${durationS}).`,
+    );
   const model = buildModel(scenario, options.hydraulics === 'exact');
   const initialState = model.initialState();
   const recorder = makeRecorder(model, durationS, options);
   const extremes = new LevelExtremesTracker(model.parts.vessels);
-  const bedIndex = new Map(model.parts.vessels.filter((v) => v.vessel.kind === 'bed').map((v) => [v.vessel.id, v.index]));
+  const bedIndex = new Map(
+    model.parts.vessels.filter((v) => v.vessel.kind === 'bed').map((v) => [v.vessel.id, v.index]),
+  );
   const cycles = new BedCycleRecorder(model.events, bedIndex, extremes.extremes);
   const stalls = new StallMonitor(model);
   const observer = composeObservers([extremes, cycles, recorder], stalls);
-  const outcome = integrateHybrid(model, initialState, integrationSettings(model, scenario, durationS, options), observer);
+  const outcome = integrateHybrid(
+    model,
+    initialState,
+    integrationSettings(model, scenario, durationS, options),
+    observer,
+  );
   const summary = summariseRun({
-    model, initialState, finalState: outcome.state, startS: 0, endS: outcome.endS,
-    extremes: extremes.extremes, cycleMarks: cycles.marks,
+    model,
+    initialState,
+    finalState: outcome.state,
+    startS: 0,
+    endS: outcome.endS,
+    extremes: extremes.extremes,
+    cycleMarks: cycles.marks,
   });
   const events = [...model.events].sort((a, b) => a.t_s - b.t_s);
   const result = {
@@ -60,15 +76,34 @@ function buildModel(scenario: Scenario, exactHydraulics: boolean): SystemModel {
   }
 }
 
-function makeRecorder(model: SystemModel, durationS: number, options: SimulateOptions): SeriesRecorder {
+function makeRecorder(
+  model: SystemModel,
+  durationS: number,
+  options: SimulateOptions,
+): SeriesRecorder {
   const requested = options.outputIntervalS ?? model.parts.scenario.run.outputInterval;
-  if (!(requested > 0)) throw new ScenarioModelError(`The output interval must be positive (got ${requested}).`);
+  if (!(requested > 0))
+    throw new ScenarioModelError(`The output interval must be positive (got ${requested}).`);
   const { maxSamples } = options;
-  const intervalS = maxSamples === undefined ? requested : Math.max(requested, durationS / Math.max(1, maxSamples - 1));
-  return new SeriesRecorder(makeSeriesProbe(model), model.stateSize, 0, intervalS, maxSamples === undefined);
+  const intervalS =
+    maxSamples === undefined
+      ? requested
+      : Math.max(requested, durationS / Math.max(1, maxSamples - 1));
+  return new SeriesRecorder(
+    makeSeriesProbe(model),
+    model.stateSize,
+    0,
+    intervalS,
+    maxSamples === undefined,
+  );
 }
 
-function integrationSettings(model: SystemModel, scenario: Scenario, durationS: number, options: SimulateOptions): IntegrateSettings {
+function integrationSettings(
+  model: SystemModel,
+  scenario: Scenario,
+  durationS: number,
+  options: SimulateOptions,
+): IntegrateSettings {
   const { layout, vessels } = model.parts;
   const capacityM3 = vessels.reduce((sum, v) => sum + v.geometry.rimVolumeM3, 0);
   const errorFloor = new Float64Array(model.stateSize).fill(1e-3 * capacityM3);
@@ -90,7 +125,10 @@ function integrationSettings(model: SystemModel, scenario: Scenario, durationS: 
 }
 
 /** Runs the stall monitor and then each observer, in order, on every piece of the trajectory. */
-function composeObservers(observers: readonly TrajectoryObserver[], stalls: StallMonitor): TrajectoryObserver {
+function composeObservers(
+  observers: readonly TrajectoryObserver[],
+  stalls: StallMonitor,
+): TrajectoryObserver {
   return {
     onSegment: (segment: StepSegment) => {
       stalls.onSegment(segment);

@@ -34,12 +34,16 @@ export function backSiphonFlowsM3PerS(
   const outletFlow = (i: number, manifoldM: number): number => {
     const outlet = line.outlets[i];
     const head = (destinationSurfacesM[i] ?? -Infinity) - manifoldM;
-    return outlet !== undefined && head > 0 ? flowForHeadM3PerS(outlet, head, model, nu, coefficients.entrance) : 0;
+    return outlet !== undefined && head > 0
+      ? flowForHeadM3PerS(outlet, head, model, nu, coefficients.entrance)
+      : 0;
   };
   const residual = (manifoldM: number): number => {
     let sum = 0;
     for (let i = 0; i < line.outlets.length; i += 1) sum += outletFlow(i, manifoldM);
-    return sum - flowForHeadM3PerS(line.main, manifoldM - sourceSurfaceM, model, nu, coefficients.exit);
+    return (
+      sum - flowForHeadM3PerS(line.main, manifoldM - sourceSurfaceM, model, nu, coefficients.exit)
+    );
   };
   const manifoldM = brentRoot(residual, sourceSurfaceM, top, 1e-12 * Math.max(1, Math.abs(top)));
   for (let i = 0; i < line.outlets.length; i += 1) out[i] = outletFlow(i, manifoldM);

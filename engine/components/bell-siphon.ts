@@ -1,4 +1,9 @@
-import type { BedVessel, LossCoefficients, BellSiphonDrain, RunSettings } from '../../shared/scenario';
+import type {
+  BedVessel,
+  LossCoefficients,
+  BellSiphonDrain,
+  RunSettings,
+} from '../../shared/scenario';
 import { formatSignificant as fmt } from '../results/format-significant';
 import type { ModelComponent, ModelContext, SwitchInput } from '../system/model-context';
 import { STANDARD_GRAVITY_M_PER_S2 as G } from '../hydraulics/standard-gravity';
@@ -71,9 +76,11 @@ const PRIME = 2;
 const BREAK = 3;
 const RIM_CONTROL = 4;
 
-
 /** Creates the bell-siphon drain of `bed`. */
-export function makeBellSiphon(bed: BedVessel & { drain: BellSiphonDrain }, wiring: BellSiphonWiring): BellSiphonComponent {
+export function makeBellSiphon(
+  bed: BedVessel & { drain: BellSiphonDrain },
+  wiring: BellSiphonWiring,
+): BellSiphonComponent {
   const drain = bed.drain;
   const standpipeAreaM2 = (Math.PI / 4) * drain.standpipe.innerDiameter ** 2;
   const pipeAreaM2 = (Math.PI / 4) * drain.pipe.innerDiameter ** 2;
@@ -94,8 +101,16 @@ export function makeBellSiphon(bed: BedVessel & { drain: BellSiphonDrain }, wiri
     eventOffset: 0,
     outflowAtLevel: (ctx, levelM) => bellOutflow(c, ctx, levelM),
     siphonFlowAtLevel: (ctx, levelM) => siphonFlow(c, ctx, levelM),
-    spillFlowAtLevel: (levelM) => bellSpillFlowM3PerS(drain.standpipe, levelM - drain.standpipe.height, c.boreControls),
-    fullBoreFlowM3PerS: makeSiphonFlowFunction(drain, wiring.friction, wiring.kinematicViscosityM2PerS, wiring.lossCoefficients, bed.floorElevation + bed.height - drain.outletElevation, wiring.exactHydraulics),
+    spillFlowAtLevel: (levelM) =>
+      bellSpillFlowM3PerS(drain.standpipe, levelM - drain.standpipe.height, c.boreControls),
+    fullBoreFlowM3PerS: makeSiphonFlowFunction(
+      drain,
+      wiring.friction,
+      wiring.kinematicViscosityM2PerS,
+      wiring.lossCoefficients,
+      bed.floorElevation + bed.height - drain.outletElevation,
+      wiring.exactHydraulics,
+    ),
     computeFlows: (ctx) => {
       ctx.flowM3PerS[wiring.channel] = bellOutflow(c, ctx, ctx.levelM[wiring.bed.index] as number);
     },
@@ -139,7 +154,13 @@ function switchBellPhase(c: BellSiphonComponent, input: SwitchInput): boolean {
   const crest = c.drain.standpipe.height;
   if (c.phase === 'filling' && due(SPILL_START, crest - level)) {
     enterPhase(c, input, 'spilling');
-    input.log({ t_s: ctx.timeS, kind: 'spill-start', where: c.bedId, detail: `Water reached the standpipe top (${fmt(crest)} m) and spills into the drain.`, values: { levelM: level } });
+    input.log({
+      t_s: ctx.timeS,
+      kind: 'spill-start',
+      where: c.bedId,
+      detail: `Water reached the standpipe top (${fmt(crest)} m) and spills into the drain.`,
+      values: { levelM: level },
+    });
     return true;
   }
   if (c.phase === 'spilling' && due(PRIME, c.primingFlowM3PerS - c.spillFlowAtLevel(level))) {
@@ -148,7 +169,13 @@ function switchBellPhase(c: BellSiphonComponent, input: SwitchInput): boolean {
   }
   if (c.phase === 'spilling' && due(SPILL_END, level - crest)) {
     enterPhase(c, input, 'filling');
-    input.log({ t_s: ctx.timeS, kind: 'spill-end', where: c.bedId, detail: 'The level fell back below the standpipe top without priming the siphon.', values: { levelM: level } });
+    input.log({
+      t_s: ctx.timeS,
+      kind: 'spill-end',
+      where: c.bedId,
+      detail: 'The level fell back below the standpipe top without priming the siphon.',
+      values: { levelM: level },
+    });
     return true;
   }
   if (c.phase === 'siphoning' && due(BREAK, level - c.breakLevelM)) {
@@ -178,15 +205,26 @@ function prime(c: BellSiphonComponent, input: SwitchInput, level: number): void 
   const spill = c.spillFlowAtLevel(level);
   const spillNumber = spill / Math.sqrt(G * c.drain.standpipe.innerDiameter ** 5);
   const spillDurationS = ctx.timeS - c.phaseStartS;
-  const available = Math.max(0, (state[bed.index] as number) - bed.geometry.volumeAtLevelM3(c.breakLevelM));
+  const available = Math.max(
+    0,
+    (state[bed.index] as number) - bed.geometry.volumeAtLevelM3(c.breakLevelM),
+  );
   const fill = Math.min(c.pipeVolumeM3, available);
   state[bed.index] = (state[bed.index] as number) - fill;
   state[heldIndex] = (state[heldIndex] as number) + fill;
   enterPhase(c, input, 'siphoning');
   input.log({
-    t_s: ctx.timeS, kind: 'primed', where: c.bedId,
+    t_s: ctx.timeS,
+    kind: 'primed',
+    where: c.bedId,
     detail: `The siphon primed: spill ${fmt(spill * 60000)} L/min reached the priming flow ${fmt(c.primingFlowM3PerS * 60000)} L/min (spill number ${fmt(spillNumber, 3)} = k_p ${fmt(c.drain.primingCoefficient, 3)}) after ${fmt(spillDurationS)} s of spilling.`,
-    values: { spillM3PerS: spill, primingFlowM3PerS: c.primingFlowM3PerS, spillNumber, levelM: level, spillDurationS },
+    values: {
+      spillM3PerS: spill,
+      primingFlowM3PerS: c.primingFlowM3PerS,
+      spillNumber,
+      levelM: level,
+      spillDurationS,
+    },
   });
 }
 
@@ -200,7 +238,9 @@ function breakSiphon(c: BellSiphonComponent, input: SwitchInput, level: number):
   const drainS = ctx.timeS - c.phaseStartS;
   enterPhase(c, input, 'filling');
   input.log({
-    t_s: ctx.timeS, kind: 'siphon-break', where: c.bedId,
+    t_s: ctx.timeS,
+    kind: 'siphon-break',
+    where: c.bedId,
     detail: `The siphon broke at ${fmt(level)} m (intake ${fmt(c.breakLevelM)} m) after draining for ${fmt(drainS)} s; ${fmt(held * 1000)} L held in the pipes fell to ${destination.vessel.id}.`,
     values: { levelM: level, drainDurationS: drainS, heldM3: held },
   });

@@ -12,12 +12,18 @@ import { STANDARD_GRAVITY_M_PER_S2 as G } from '../hydraulics/standard-gravity';
  * branch: the model keeps it as a mode switched at {@link rimControlHeadM}, where both are equal,
  * so each branch stays smooth for the integrator; `undefined` takes the minimum. 0 for H ≤ 0.
  */
-export function bellSpillFlowM3PerS(standpipe: Standpipe, headM: number, boreControls?: boolean): number {
+export function bellSpillFlowM3PerS(
+  standpipe: Standpipe,
+  headM: number,
+  boreControls?: boolean,
+): number {
   if (!(headM > 0)) return 0;
   const boreAreaM2 = (Math.PI / 4) * standpipe.innerDiameter ** 2;
-  if (boreControls === true) return torricelliOutflowM3PerS(standpipe.dischargeCoefficient, boreAreaM2, headM);
+  if (boreControls === true)
+    return torricelliOutflowM3PerS(standpipe.dischargeCoefficient, boreAreaM2, headM);
   // weirFlowM3PerS's law C_w·L·H^1.5, written with √ because it runs in every right-hand side.
-  const weir = standpipe.weirCoefficient * Math.PI * standpipe.outerDiameter * headM * Math.sqrt(headM);
+  const weir =
+    standpipe.weirCoefficient * Math.PI * standpipe.outerDiameter * headM * Math.sqrt(headM);
   if (boreControls === false) return weir;
   return Math.min(weir, torricelliOutflowM3PerS(standpipe.dischargeCoefficient, boreAreaM2, headM));
 }
@@ -28,5 +34,8 @@ export function bellSpillFlowM3PerS(standpipe: Standpipe, headM: number, boreCon
  * H = C_d·√(2g)·D_i² / (4·C_w·D_o). Same sources.
  */
 export function rimControlHeadM(standpipe: Standpipe): number {
-  return (standpipe.dischargeCoefficient * Math.sqrt(2 * G) * standpipe.innerDiameter ** 2) / (4 * standpipe.weirCoefficient * standpipe.outerDiameter);
+  return (
+    (standpipe.dischargeCoefficient * Math.sqrt(2 * G) * standpipe.innerDiameter ** 2) /
+    (4 * standpipe.weirCoefficient * standpipe.outerDiameter)
+  );
 }

@@ -20,7 +20,11 @@ export interface FloatSwitchComponent extends ModelComponent {
 }
 
 /** Creates the float switch `control` watching `vessel` and acting on `pump`. */
-export function makeFloatSwitch(control: FloatSwitchControl, vessel: VesselComponent, pump: FloatSwitchTarget): FloatSwitchComponent {
+export function makeFloatSwitch(
+  control: FloatSwitchControl,
+  vessel: VesselComponent,
+  pump: FloatSwitchTarget,
+): FloatSwitchComponent {
   const c: FloatSwitchComponent = {
     control,
     holding: vessel.vessel.initialLevel < control.stopBelow,
@@ -37,8 +41,16 @@ export function makeFloatSwitch(control: FloatSwitchControl, vessel: VesselCompo
       if (!(g < 0 || (g <= 0 && input.fired[c.eventOffset] === 1))) return false;
       c.holding = !c.holding;
       pump.floatStops += c.holding ? 1 : -1;
-      const what = c.holding ? `fell below ${fmt(control.stopBelow)} m` : `rose above ${fmt(control.restartAbove)} m`;
-      input.log({ t_s: input.ctx.timeS, kind: 'float-switch', where: pump.id, detail: `The float switch in ${vessel.vessel.id}: the level ${what}.`, values: { levelM: level } });
+      const what = c.holding
+        ? `fell below ${fmt(control.stopBelow)} m`
+        : `rose above ${fmt(control.restartAbove)} m`;
+      input.log({
+        t_s: input.ctx.timeS,
+        kind: 'float-switch',
+        where: pump.id,
+        detail: `The float switch in ${vessel.vessel.id}: the level ${what}.`,
+        values: { levelM: level },
+      });
       return true;
     },
   };

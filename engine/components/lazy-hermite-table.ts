@@ -52,7 +52,12 @@ export function makeLazyHermiteTable(
       const c = value(k + 1);
       const d = value(k + 2);
       for (let j = 0; j < width; j += 1) {
-        slopes[slot * width + j] = ((values[a + j] as number) - 8 * (values[b + j] as number) + 8 * (values[c + j] as number) - (values[d + j] as number)) / (12 * spacing);
+        slopes[slot * width + j] =
+          ((values[a + j] as number) -
+            8 * (values[b + j] as number) +
+            8 * (values[c + j] as number) -
+            (values[d + j] as number)) /
+          (12 * spacing);
       }
       value(k);
       slopeKnown[slot] = 1;
@@ -77,7 +82,11 @@ export function makeLazyHermiteTable(
       const a1 = -2 * s3 + 3 * s2;
       const b1 = (s3 - s2) * spacing;
       for (let j = 0; j < width; j += 1) {
-        out[j] = a0 * (values[lo + j] as number) + b0 * (slopes[lo + j] as number) + a1 * (values[hi + j] as number) + b1 * (slopes[hi + j] as number);
+        out[j] =
+          a0 * (values[lo + j] as number) +
+          b0 * (slopes[lo + j] as number) +
+          a1 * (values[hi + j] as number) +
+          b1 * (slopes[hi + j] as number);
       }
       return true;
     },

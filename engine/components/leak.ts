@@ -20,9 +20,15 @@ export interface LeakComponent extends ModelComponent {
 }
 
 /** Creates leak `label` from `vessel` on `channel` (vessel → its loss sink). */
-export function makeLeak(leak: Leak, label: string, vessel: VesselComponent, channel: number): LeakComponent {
+export function makeLeak(
+  leak: Leak,
+  label: string,
+  vessel: VesselComponent,
+  channel: number,
+): LeakComponent {
   const areaM2 = (Math.PI / 4) * leak.diameter ** 2;
-  const head = (ctx: ModelContext): number => (ctx.surfaceM[vessel.index] as number) - leak.elevation;
+  const head = (ctx: ModelContext): number =>
+    (ctx.surfaceM[vessel.index] as number) - leak.elevation;
   const c: LeakComponent = {
     leak,
     label,
@@ -31,7 +37,10 @@ export function makeLeak(leak: Leak, label: string, vessel: VesselComponent, cha
     eventCount: 1,
     eventOffset: 0,
     computeFlows: (ctx: ModelContext) => {
-      ctx.flowM3PerS[channel] = c.open && !c.dry ? torricelliOutflowM3PerS(leak.dischargeCoefficient, areaM2, head(ctx)) : 0;
+      ctx.flowM3PerS[channel] =
+        c.open && !c.dry
+          ? torricelliOutflowM3PerS(leak.dischargeCoefficient, areaM2, head(ctx))
+          : 0;
     },
     eventValues: (ctx, out) => {
       out[c.eventOffset] = c.open ? orificeDryEventValue(c.dry, head(ctx)) : 1;

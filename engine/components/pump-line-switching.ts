@@ -20,7 +20,9 @@ export function submergenceM(c: PumpLineComponent, ctx: ModelContext, i: number)
 /** Source volume above which the pump may (re)start, m³: intake + margin, plus refilling an empty line. */
 export function startVolumeM3(c: PumpLineComponent, marginM: number): number {
   const geometry = c.wiring.source.geometry;
-  return geometry.volumeAtLevelM3(c.pump.intakeHeight + marginM) + (c.lineFull ? 0 : c.lineVolumeM3);
+  return (
+    geometry.volumeAtLevelM3(c.pump.intakeHeight + marginM) + (c.lineFull ? 0 : c.lineVolumeM3)
+  );
 }
 
 /** Sets the dry flag and keeps the dry-time total. */
@@ -64,11 +66,21 @@ function switchWhileWanted(c: PumpLineComponent, input: SwitchInput): boolean {
   const source = c.wiring.source;
   if (c.running && due(DRY, (ctx.levelM[source.index] as number) - c.pump.intakeHeight)) {
     setDry(c, true, ctx.timeS);
-    input.log({ t_s: ctx.timeS, kind: 'pump-dry', where: c.id, detail: `The level in ${source.vessel.id} fell to the pump intake (${fmt(c.pump.intakeHeight)} m above its floor): the pump runs dry and delivers nothing.`, values: { intakeHeightM: c.pump.intakeHeight } });
+    input.log({
+      t_s: ctx.timeS,
+      kind: 'pump-dry',
+      where: c.id,
+      detail: `The level in ${source.vessel.id} fell to the pump intake (${fmt(c.pump.intakeHeight)} m above its floor): the pump runs dry and delivers nothing.`,
+      values: { intakeHeightM: c.pump.intakeHeight },
+    });
     stop(c, input);
     return true;
   }
-  if (!c.running && c.dry && due(RESTART, startVolumeM3(c, DRY_RESTART_MARGIN_M) - (state[source.index] as number))) {
+  if (
+    !c.running &&
+    c.dry &&
+    due(RESTART, startVolumeM3(c, DRY_RESTART_MARGIN_M) - (state[source.index] as number))
+  ) {
     tryStart(c, input, 'pump-restart');
     return true;
   }
@@ -76,7 +88,11 @@ function switchWhileWanted(c: PumpLineComponent, input: SwitchInput): boolean {
 }
 
 /** Starts the pump when the source holds enough water above the intake (to refill the line); else it is dry. */
-function tryStart(c: PumpLineComponent, input: SwitchInput, kind: 'pump-on' | 'pump-restart'): void {
+function tryStart(
+  c: PumpLineComponent,
+  input: SwitchInput,
+  kind: 'pump-on' | 'pump-restart',
+): void {
   const { state, ctx } = input;
   const source = c.wiring.source;
   const sourceVolume = state[source.index] as number;
@@ -84,7 +100,13 @@ function tryStart(c: PumpLineComponent, input: SwitchInput, kind: 'pump-on' | 'p
   if (!(sourceVolume > startVolumeM3(c, margin))) {
     if (!c.dry) {
       setDry(c, true, ctx.timeS);
-      input.log({ t_s: ctx.timeS, kind: 'pump-dry', where: c.id, detail: `The pump cannot start: ${source.vessel.id} holds too little water above the intake (${fmt(c.pump.intakeHeight)} m) to fill the line.`, values: { intakeHeightM: c.pump.intakeHeight } });
+      input.log({
+        t_s: ctx.timeS,
+        kind: 'pump-dry',
+        where: c.id,
+        detail: `The pump cannot start: ${source.vessel.id} holds too little water above the intake (${fmt(c.pump.intakeHeight)} m) to fill the line.`,
+        values: { intakeHeightM: c.pump.intakeHeight },
+      });
     }
     return;
   }
@@ -97,7 +119,12 @@ function tryStart(c: PumpLineComponent, input: SwitchInput, kind: 'pump-on' | 'p
   c.backSiphoning = false;
   c.running = true;
   if (kind === 'pump-restart') {
-    input.log({ t_s: ctx.timeS, kind, where: c.id, detail: `${source.vessel.id} is back above the intake plus ${fmt(DRY_RESTART_MARGIN_M * 1000)} mm: the pump runs again.` });
+    input.log({
+      t_s: ctx.timeS,
+      kind,
+      where: c.id,
+      detail: `${source.vessel.id} is back above the intake plus ${fmt(DRY_RESTART_MARGIN_M * 1000)} mm: the pump runs again.`,
+    });
   }
 }
 
@@ -107,7 +134,12 @@ function stop(c: PumpLineComponent, input: SwitchInput): void {
   if (c.pump.checkValve || !c.lineFull) return;
   if (c.outletsSubmerged(input.ctx)) {
     c.backSiphoning = true;
-    input.log({ t_s: input.ctx.timeS, kind: 'back-siphon-start', where: c.id, detail: `The outlets are under water and there is no check valve: water siphons back through the stopped pump into ${c.wiring.source.vessel.id}.` });
+    input.log({
+      t_s: input.ctx.timeS,
+      kind: 'back-siphon-start',
+      where: c.id,
+      detail: `The outlets are under water and there is no check valve: water siphons back through the stopped pump into ${c.wiring.source.vessel.id}.`,
+    });
     return;
   }
   drainBack(c, input);
@@ -129,12 +161,24 @@ function endBackSiphon(c: PumpLineComponent, input: SwitchInput): boolean {
   if (!(g < 0 || (g <= 0 && input.fired[c.eventOffset + SIPHON_END] === 1))) return false;
   c.backSiphoning = false;
   drainBack(c, input);
-  input.log({ t_s: input.ctx.timeS, kind: 'back-siphon-end', where: c.id, detail: 'An outlet is clear of the water again: air enters and the back-siphon stops; the line drains back.' });
+  input.log({
+    t_s: input.ctx.timeS,
+    kind: 'back-siphon-end',
+    where: c.id,
+    detail:
+      'An outlet is clear of the water again: air enters and the back-siphon stops; the line drains back.',
+  });
   return true;
 }
 
 function logCommand(c: PumpLineComponent, input: SwitchInput, wants: boolean): void {
-  const reason = !c.wiring.power.on ? 'power cut' : !c.commandedOn ? 'switched off by the schedule' : c.floatStops > 0 ? 'held off by a float switch' : 'switched on';
+  const reason = !c.wiring.power.on
+    ? 'power cut'
+    : !c.commandedOn
+      ? 'switched off by the schedule'
+      : c.floatStops > 0
+        ? 'held off by a float switch'
+        : 'switched on';
   const detail = wants ? 'The pump is switched on.' : `The pump stops: ${reason}.`;
   input.log({ t_s: input.ctx.timeS, kind: wants ? 'pump-on' : 'pump-off', where: c.id, detail });
 }

@@ -4,8 +4,17 @@ import type { ModelComponent, ModelContext } from '../system/model-context';
 import { makePumpLineHydraulics, type PumpLineHydraulics } from '../system/operating-point';
 import { backSiphonFlowsM3PerS } from './back-siphon-flow';
 import type { FloatSwitchTarget } from './float-switch';
-import { makePumpResponseFunction, type PumpResponse, type PumpResponseFunction } from './pump-response-table';
-import { DRY_RESTART_MARGIN_M, startVolumeM3, submergenceM, switchPumpLine } from './pump-line-switching';
+import {
+  makePumpResponseFunction,
+  type PumpResponse,
+  type PumpResponseFunction,
+} from './pump-response-table';
+import {
+  DRY_RESTART_MARGIN_M,
+  startVolumeM3,
+  submergenceM,
+  switchPumpLine,
+} from './pump-line-switching';
 import type { VesselComponent } from './vessel';
 
 /** Where a pump line draws from and delivers to, and where its totals are counted. */
@@ -66,7 +75,8 @@ export interface PumpLineComponent extends ModelComponent, FloatSwitchTarget {
 
 /** Creates the pump line of `pump`. */
 export function makePumpLine(pump: Pump, wiring: PumpLineWiring): PumpLineComponent {
-  const pipeVolume = (p: { length: number; innerDiameter: number }): number => (Math.PI / 4) * p.innerDiameter ** 2 * p.length;
+  const pipeVolume = (p: { length: number; innerDiameter: number }): number =>
+    (Math.PI / 4) * p.innerDiameter ** 2 * p.length;
   const hydraulics = makePumpLineHydraulics(pump, wiring.lossCoefficients, wiring.faultFlowScale);
   const source = wiring.source.vessel;
   const zLowM = source.floorElevation + Math.max(0, pump.intakeHeight - 0.1 * source.height);
@@ -75,7 +85,9 @@ export function makePumpLine(pump: Pump, wiring: PumpLineWiring): PumpLineCompon
     id: pump.id,
     pump,
     wiring,
-    lineVolumeM3: pipeVolume(pump.main) + pump.outlets.reduce((sum, outlet) => sum + pipeVolume(outlet.pipe), 0),
+    lineVolumeM3:
+      pipeVolume(pump.main) +
+      pump.outlets.reduce((sum, outlet) => sum + pipeVolume(outlet.pipe), 0),
     commandedOn: pump.initialState === 'on',
     wanted: false,
     running: false,
@@ -87,9 +99,21 @@ export function makePumpLine(pump: Pump, wiring: PumpLineWiring): PumpLineCompon
     floatStops: 0,
     reading: { flowM3PerS: 0, headM: 0, powerW: 0 },
     hydraulics,
-    response: makePumpResponseFunction(hydraulics, pump.outlets.map((outlet) => outlet.elevation), wiring.friction, wiring.kinematicViscosityM2PerS, zLowM, zHighM, wiring.exactHydraulics),
+    response: makePumpResponseFunction(
+      hydraulics,
+      pump.outlets.map((outlet) => outlet.elevation),
+      wiring.friction,
+      wiring.kinematicViscosityM2PerS,
+      zLowM,
+      zHighM,
+      wiring.exactHydraulics,
+    ),
     targetsM: pump.outlets.map((outlet) => outlet.elevation),
-    point: { pumpFlowM3PerS: 0, headM: 0, outletFlowsM3PerS: new Float64Array(pump.outlets.length) },
+    point: {
+      pumpFlowM3PerS: 0,
+      headM: 0,
+      outletFlowsM3PerS: new Float64Array(pump.outlets.length),
+    },
     backFlowsM3PerS: new Float64Array(pump.outlets.length),
     eventCount: 3,
     eventOffset: 0,
@@ -107,7 +131,8 @@ function writePumpEvents(c: PumpLineComponent, ctx: ModelContext, out: Float64Ar
   out[o] = c.running ? (ctx.levelM[c.wiring.source.index] as number) - c.pump.intakeHeight : 1;
   out[o + 1] = c.dry && c.wanted ? startVolumeM3(c, DRY_RESTART_MARGIN_M) - sourceVolume : 1;
   let lowest = Infinity;
-  for (let i = 0; i < c.pump.outlets.length; i += 1) lowest = Math.min(lowest, submergenceM(c, ctx, i));
+  for (let i = 0; i < c.pump.outlets.length; i += 1)
+    lowest = Math.min(lowest, submergenceM(c, ctx, i));
   out[o + 2] = c.backSiphoning ? lowest : 1;
 }
 
@@ -145,7 +170,17 @@ function writePumpFlows(c: PumpLineComponent, ctx: ModelContext, rates: Float64A
 
 function writeBackSiphonFlows(c: PumpLineComponent, ctx: ModelContext): void {
   const { source, outlets, friction, kinematicViscosityM2PerS, lossCoefficients } = c.wiring;
-  for (let i = 0; i < outlets.length; i += 1) c.targetsM[i] = ctx.surfaceM[outlets[i]?.destination.index ?? 0] as number;
-  backSiphonFlowsM3PerS(c.hydraulics, ctx.surfaceM[source.index] as number, c.targetsM, friction, kinematicViscosityM2PerS, lossCoefficients, c.backFlowsM3PerS);
-  for (let i = 0; i < outlets.length; i += 1) ctx.flowM3PerS[outlets[i]?.channel ?? 0] = -(c.backFlowsM3PerS[i] as number);
+  for (let i = 0; i < outlets.length; i += 1)
+    c.targetsM[i] = ctx.surfaceM[outlets[i]?.destination.index ?? 0] as number;
+  backSiphonFlowsM3PerS(
+    c.hydraulics,
+    ctx.surfaceM[source.index] as number,
+    c.targetsM,
+    friction,
+    kinematicViscosityM2PerS,
+    lossCoefficients,
+    c.backFlowsM3PerS,
+  );
+  for (let i = 0; i < outlets.length; i += 1)
+    ctx.flowM3PerS[outlets[i]?.channel ?? 0] = -(c.backFlowsM3PerS[i] as number);
 }

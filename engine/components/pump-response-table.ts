@@ -21,7 +21,12 @@ export interface PumpResponse {
  */
 export interface PumpResponseFunction {
   /** Fills `into` for source surface `sourceSurfaceM` and outlet targets (m above datum). */
-  evaluate(sourceSurfaceM: number, targetsM: readonly number[], freeDischarge: boolean, into: PumpResponse): void;
+  evaluate(
+    sourceSurfaceM: number,
+    targetsM: readonly number[],
+    freeDischarge: boolean,
+    into: PumpResponse,
+  ): void;
 }
 
 /** Builds the response of `line` (outlet elevations `elevationsM`) over [zLowM, zHighM]. */
@@ -37,24 +42,40 @@ export function makePumpResponseFunction(
   const outlets = elevationsM.length;
   let warm: number | undefined;
   const solve = (zS: number, targets: readonly number[], into: PumpResponse): void => {
-    const point = solvePumpOperatingPoint(line, zS, targets, friction, kinematicViscosityM2PerS, warm);
+    const point = solvePumpOperatingPoint(
+      line,
+      zS,
+      targets,
+      friction,
+      kinematicViscosityM2PerS,
+      warm,
+    );
     warm = point.pumpFlowM3PerS > 0 ? point.pumpFlowM3PerS : undefined;
     into.pumpFlowM3PerS = point.pumpFlowM3PerS;
     into.headM = point.headM;
-    for (let i = 0; i < outlets; i += 1) into.outletFlowsM3PerS[i] = point.outletFlowsM3PerS[i] ?? 0;
+    for (let i = 0; i < outlets; i += 1)
+      into.outletFlowsM3PerS[i] = point.outletFlowsM3PerS[i] ?? 0;
   };
-  const table: LazyHermiteTable | undefined = exact ? undefined : makeLazyHermiteTable(
-    2 + outlets,
-    (zS, out) => {
-      const point = solvePumpOperatingPoint(line, zS, elevationsM, friction, kinematicViscosityM2PerS);
-      out[0] = point.pumpFlowM3PerS;
-      out[1] = point.headM;
-      for (let i = 0; i < outlets; i += 1) out[2 + i] = point.outletFlowsM3PerS[i] ?? 0;
-    },
-    zLowM,
-    zHighM,
-    CELLS,
-  );
+  const table: LazyHermiteTable | undefined = exact
+    ? undefined
+    : makeLazyHermiteTable(
+        2 + outlets,
+        (zS, out) => {
+          const point = solvePumpOperatingPoint(
+            line,
+            zS,
+            elevationsM,
+            friction,
+            kinematicViscosityM2PerS,
+          );
+          out[0] = point.pumpFlowM3PerS;
+          out[1] = point.headM;
+          for (let i = 0; i < outlets; i += 1) out[2 + i] = point.outletFlowsM3PerS[i] ?? 0;
+        },
+        zLowM,
+        zHighM,
+        CELLS,
+      );
   const row = new Float64Array(2 + outlets);
   return {
     evaluate: (sourceSurfaceM, targetsM, freeDischarge, into) => {
@@ -64,7 +85,8 @@ export function makePumpResponseFunction(
       }
       into.pumpFlowM3PerS = Math.max(0, row[0] as number);
       into.headM = row[1] as number;
-      for (let i = 0; i < outlets; i += 1) into.outletFlowsM3PerS[i] = Math.max(0, row[2 + i] as number);
+      for (let i = 0; i < outlets; i += 1)
+        into.outletFlowsM3PerS[i] = Math.max(0, row[2 + i] as number);
     },
   };
 }

@@ -1,4 +1,9 @@
-import type { BedVessel, LossCoefficients, RunSettings, StandpipeDrain } from '../../shared/scenario';
+import type {
+  BedVessel,
+  LossCoefficients,
+  RunSettings,
+  StandpipeDrain,
+} from '../../shared/scenario';
 import { torricelliOutflowM3PerS } from '../hydraulics/torricelli-outflow';
 import { formatSignificant as fmt } from '../results/format-significant';
 import type { ModelComponent, ModelContext, SwitchInput } from '../system/model-context';
@@ -52,7 +57,10 @@ const RIM_CONTROL = 2;
 const WEEP_DRY = 3;
 
 /** Creates the standpipe drain of `bed`. */
-export function makeStandpipeDrain(bed: BedVessel & { drain: StandpipeDrain }, wiring: StandpipeWiring): StandpipeComponent {
+export function makeStandpipeDrain(
+  bed: BedVessel & { drain: StandpipeDrain },
+  wiring: StandpipeWiring,
+): StandpipeComponent {
   const c: StandpipeComponent = {
     bedId: bed.id,
     drain: bed.drain,
@@ -60,7 +68,14 @@ export function makeStandpipeDrain(bed: BedVessel & { drain: StandpipeDrain }, w
     phase: bed.initialLevel > bed.drain.standpipe.height ? 'spilling' : 'filling',
     phaseStartS: 0,
     floodedTimeS: 0,
-    fullBoreFlowM3PerS: makeSiphonFlowFunction(bed.drain, wiring.friction, wiring.kinematicViscosityM2PerS, wiring.lossCoefficients, bed.floorElevation + bed.height - bed.drain.outletElevation, wiring.exactHydraulics),
+    fullBoreFlowM3PerS: makeSiphonFlowFunction(
+      bed.drain,
+      wiring.friction,
+      wiring.kinematicViscosityM2PerS,
+      wiring.lossCoefficients,
+      bed.floorElevation + bed.height - bed.drain.outletElevation,
+      wiring.exactHydraulics,
+    ),
     rimControlHeadM: rimControlHeadM(bed.drain.standpipe),
     boreControls: false,
     weepDry: bed.initialLevel <= 0,
@@ -73,8 +88,10 @@ export function makeStandpipeDrain(bed: BedVessel & { drain: StandpipeDrain }, w
       out[c.eventOffset + SPILL_START] = c.phase === 'filling' ? crest - level : 1;
       out[c.eventOffset + SPILL_END] = c.phase === 'spilling' ? level - crest : 1;
       const overRim = level - crest - c.rimControlHeadM;
-      out[c.eventOffset + RIM_CONTROL] = c.phase !== 'spilling' ? 1 : c.boreControls ? overRim : -overRim;
-      out[c.eventOffset + WEEP_DRY] = c.drain.weepHole === undefined ? 1 : orificeDryEventValue(c.weepDry, level);
+      out[c.eventOffset + RIM_CONTROL] =
+        c.phase !== 'spilling' ? 1 : c.boreControls ? overRim : -overRim;
+      out[c.eventOffset + WEEP_DRY] =
+        c.drain.weepHole === undefined ? 1 : orificeDryEventValue(c.weepDry, level);
     },
     switchModes: (input) => switchStandpipePhase(c, input),
   };
@@ -87,7 +104,11 @@ function writeStandpipeFlows(c: StandpipeComponent, ctx: ModelContext): void {
   const open = 1 - blockedFraction;
   let spill = 0;
   if (c.phase === 'spilling') {
-    const rim = bellSpillFlowM3PerS(c.drain.standpipe, level - c.drain.standpipe.height, c.boreControls);
+    const rim = bellSpillFlowM3PerS(
+      c.drain.standpipe,
+      level - c.drain.standpipe.height,
+      c.boreControls,
+    );
     const tailM = Math.max(c.drain.outletElevation, ctx.surfaceM[destination.index] as number);
     const headDropM = bed.vessel.floorElevation + level - tailM;
     spill = Math.min(rim, c.fullBoreFlowM3PerS(headDropM));
@@ -96,7 +117,9 @@ function writeStandpipeFlows(c: StandpipeComponent, ctx: ModelContext): void {
   const weep = c.drain.weepHole;
   if (weep !== undefined && weepChannel >= 0) {
     const areaM2 = (Math.PI / 4) * weep.diameter ** 2;
-    ctx.flowM3PerS[weepChannel] = c.weepDry ? 0 : torricelliOutflowM3PerS(weep.dischargeCoefficient, areaM2, level) * open;
+    ctx.flowM3PerS[weepChannel] = c.weepDry
+      ? 0
+      : torricelliOutflowM3PerS(weep.dischargeCoefficient, areaM2, level) * open;
   }
 }
 
@@ -109,7 +132,13 @@ function switchStandpipePhase(c: StandpipeComponent, input: SwitchInput): boolea
   if (c.phase === 'filling' && due(SPILL_START, crest - level)) {
     c.phase = 'spilling';
     c.phaseStartS = ctx.timeS;
-    input.log({ t_s: ctx.timeS, kind: 'spill-start', where: c.bedId, detail: `Water reached the standpipe top (${fmt(crest)} m): the bed is flooded and spills into the drain.`, values: { levelM: level } });
+    input.log({
+      t_s: ctx.timeS,
+      kind: 'spill-start',
+      where: c.bedId,
+      detail: `Water reached the standpipe top (${fmt(crest)} m): the bed is flooded and spills into the drain.`,
+      values: { levelM: level },
+    });
     return true;
   }
   if (c.phase === 'spilling' && due(SPILL_END, level - crest)) {
@@ -117,7 +146,13 @@ function switchStandpipePhase(c: StandpipeComponent, input: SwitchInput): boolea
     c.phase = 'filling';
     c.phaseStartS = ctx.timeS;
     c.boreControls = false;
-    input.log({ t_s: ctx.timeS, kind: 'spill-end', where: c.bedId, detail: 'The level fell below the standpipe top: the bed drains.', values: { levelM: level } });
+    input.log({
+      t_s: ctx.timeS,
+      kind: 'spill-end',
+      where: c.bedId,
+      detail: 'The level fell below the standpipe top: the bed drains.',
+      values: { levelM: level },
+    });
     return true;
   }
   const overRim = level - crest - c.rimControlHeadM;

@@ -20,12 +20,19 @@ export function overflowFlowM3PerS(overflow: Overflow, headM: number): number {
 }
 
 /** The overflow of `vessel` on `channel` (to another vessel or to its loss sink). Its start and end are observed by the vessel. */
-export function makeVesselOverflow(vessel: VesselComponent, overflow: Overflow, channel: number): ModelComponent {
+export function makeVesselOverflow(
+  vessel: VesselComponent,
+  overflow: Overflow,
+  channel: number,
+): ModelComponent {
   return {
     eventCount: 0,
     eventOffset: 0,
     computeFlows: (ctx: ModelContext) => {
-      ctx.flowM3PerS[channel] = overflowFlowM3PerS(overflow, (ctx.surfaceM[vessel.index] as number) - overflow.elevation);
+      ctx.flowM3PerS[channel] = overflowFlowM3PerS(
+        overflow,
+        (ctx.surfaceM[vessel.index] as number) - overflow.elevation,
+      );
     },
     eventValues: () => {},
     switchModes: () => false,

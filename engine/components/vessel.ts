@@ -44,7 +44,12 @@ const MIN_LEVEL = 4;
 const OVERFLOW = 5;
 
 /** Creates the limits component of `vessel`, whose volume is state component `index`. */
-export function makeVesselComponent(vessel: Vessel, index: number, rimSinkIndex: number, rimChannel: number): VesselComponent {
+export function makeVesselComponent(
+  vessel: Vessel,
+  index: number,
+  rimSinkIndex: number,
+  rimChannel: number,
+): VesselComponent {
   const geometry = makeVesselGeometry(vessel);
   const component: VesselComponent = {
     vessel,
@@ -55,7 +60,9 @@ export function makeVesselComponent(vessel: Vessel, index: number, rimSinkIndex:
     brimful: false,
     empty: false,
     belowMin: vessel.minLevel !== undefined && vessel.initialLevel < vessel.minLevel,
-    aboveOverflow: vessel.overflow !== undefined && vessel.floorElevation + vessel.initialLevel > vessel.overflow.elevation,
+    aboveOverflow:
+      vessel.overflow !== undefined &&
+      vessel.floorElevation + vessel.initialLevel > vessel.overflow.elevation,
     eventCount: 6,
     eventOffset: 0,
     computeFlows: () => {},
@@ -78,7 +85,12 @@ function writeVesselEvents(c: VesselComponent, ctx: ModelContext, out: Float64Ar
   out[o + MIN_LEVEL] = min === undefined ? 1 : c.belowMin ? min - level : level - min;
   const overflow = c.vessel.overflow;
   const surface = ctx.surfaceM[c.index] as number;
-  out[o + OVERFLOW] = overflow === undefined ? 1 : c.aboveOverflow ? surface - overflow.elevation : overflow.elevation - surface;
+  out[o + OVERFLOW] =
+    overflow === undefined
+      ? 1
+      : c.aboveOverflow
+        ? surface - overflow.elevation
+        : overflow.elevation - surface;
 }
 
 function switchVesselModes(c: VesselComponent, input: SwitchInput): boolean {
@@ -93,7 +105,13 @@ function switchVesselModes(c: VesselComponent, input: SwitchInput): boolean {
   if (!c.brimful && due(BRIM_ENTER, c.geometry.rimVolumeM3 - volume) && net > 0) {
     c.brimful = true;
     changed = true;
-    log({ t_s: t, kind: 'rim-overflow', where: c.vessel.id, detail: `${c.vessel.id} is full to its rim (${fmt(c.vessel.height)} m) and spills over it; the water is lost.`, values: { inflowM3PerS: net } });
+    log({
+      t_s: t,
+      kind: 'rim-overflow',
+      where: c.vessel.id,
+      detail: `${c.vessel.id} is full to its rim (${fmt(c.vessel.height)} m) and spills over it; the water is lost.`,
+      values: { inflowM3PerS: net },
+    });
   } else if (c.brimful && due(BRIM_EXIT, net)) {
     c.brimful = false;
     changed = true;
@@ -119,29 +137,61 @@ function spillAboveRim(c: VesselComponent, input: SwitchInput, rimEventFired: bo
   input.state[c.index] = c.geometry.rimVolumeM3;
   input.state[c.rimSinkIndex] = (input.state[c.rimSinkIndex] as number) + surplus;
   if (!c.brimful && !rimEventFired && surplus > 1e-9 * c.geometry.rimVolumeM3) {
-    input.log({ t_s: input.ctx.timeS, kind: 'rim-overflow', where: c.vessel.id, detail: `${fmt(surplus * 1000)} L arriving at once spilled over the rim of ${c.vessel.id}.`, values: { lostM3: surplus } });
+    input.log({
+      t_s: input.ctx.timeS,
+      kind: 'rim-overflow',
+      where: c.vessel.id,
+      detail: `${fmt(surplus * 1000)} L arriving at once spilled over the rim of ${c.vessel.id}.`,
+      values: { lostM3: surplus },
+    });
   }
   return true;
 }
 
-function switchObservations(c: VesselComponent, input: SwitchInput, level: number, due: (k: number, g: number) => boolean): boolean {
+function switchObservations(
+  c: VesselComponent,
+  input: SwitchInput,
+  level: number,
+  due: (k: number, g: number) => boolean,
+): boolean {
   const { ctx, log } = input;
   const t = ctx.timeS;
   let changed = false;
   const min = c.vessel.minLevel;
-  if (min !== undefined && (c.belowMin ? due(MIN_LEVEL, min - level) : due(MIN_LEVEL, level - min))) {
+  if (
+    min !== undefined &&
+    (c.belowMin ? due(MIN_LEVEL, min - level) : due(MIN_LEVEL, level - min))
+  ) {
     c.belowMin = !c.belowMin;
     changed = true;
-    if (c.belowMin) log({ t_s: t, kind: 'below-min-level', where: c.vessel.id, detail: `${c.vessel.id} fell below its minimum level of ${fmt(min)} m.`, values: { minLevelM: min } });
+    if (c.belowMin)
+      log({
+        t_s: t,
+        kind: 'below-min-level',
+        where: c.vessel.id,
+        detail: `${c.vessel.id} fell below its minimum level of ${fmt(min)} m.`,
+        values: { minLevelM: min },
+      });
   }
   const overflow = c.vessel.overflow;
   const surface = ctx.surfaceM[c.index] as number;
-  if (overflow !== undefined && (c.aboveOverflow ? due(OVERFLOW, surface - overflow.elevation) : due(OVERFLOW, overflow.elevation - surface))) {
+  if (
+    overflow !== undefined &&
+    (c.aboveOverflow
+      ? due(OVERFLOW, surface - overflow.elevation)
+      : due(OVERFLOW, overflow.elevation - surface))
+  ) {
     c.aboveOverflow = !c.aboveOverflow;
     changed = true;
     const kind = c.aboveOverflow ? 'overflow-start' : 'overflow-end';
     const verb = c.aboveOverflow ? 'started' : 'stopped';
-    log({ t_s: t, kind, where: c.vessel.id, detail: `The overflow of ${c.vessel.id} (elevation ${fmt(overflow.elevation)} m, to ${overflow.to}) ${verb}.`, values: { elevationM: overflow.elevation } });
+    log({
+      t_s: t,
+      kind,
+      where: c.vessel.id,
+      detail: `The overflow of ${c.vessel.id} (elevation ${fmt(overflow.elevation)} m, to ${overflow.to}) ${verb}.`,
+      values: { elevationM: overflow.elevation },
+    });
   }
   return changed;
 }

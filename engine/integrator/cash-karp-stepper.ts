@@ -68,7 +68,8 @@ export function makeCashKarpStepper(
     tol: relativeTolerance,
     dtMaxMag: settings.maxStepS,
     verbose: false,
-    errorScaleFunction: (i, dt, y, dydt) => Math.abs(y) + Math.abs(dt * dydt) + (errorFloor[i] ?? 0) + 1e-300,
+    errorScaleFunction: (i, dt, y, dydt) =>
+      Math.abs(y) + Math.abs(dt * dydt) + (errorFloor[i] ?? 0) + 1e-300,
   });
   return {
     get timeS() {

@@ -5,7 +5,11 @@ import { makeStepSegment } from './step-segment';
 const cubic = (t: number): number => 0.7 - 1.3 * t + 2.1 * t * t - 0.45 * t * t * t;
 const cubicSlope = (t: number): number => -1.3 + 4.2 * t - 1.35 * t * t;
 
-function segmentOf(fns: Array<[(t: number) => number, (t: number) => number]>, t0S: number, t1S: number) {
+function segmentOf(
+  fns: Array<[(t: number) => number, (t: number) => number]>,
+  t0S: number,
+  t1S: number,
+) {
   const seg = makeStepSegment(fns.length);
   seg.t0S = t0S;
   seg.t1S = t1S;
@@ -28,7 +32,14 @@ describe('cubic Hermite interpolant', () => {
   });
 
   it('returns the end points bit for bit', () => {
-    const seg = segmentOf([[Math.exp, Math.exp], [Math.sin, Math.cos]], 0.1, 0.35);
+    const seg = segmentOf(
+      [
+        [Math.exp, Math.exp],
+        [Math.sin, Math.cos],
+      ],
+      0.1,
+      0.35,
+    );
     const out = new Float64Array(2);
     hermiteStateAt(seg, 0.35, out);
     expect(Array.from(out)).toEqual(Array.from(seg.y1));
@@ -47,7 +58,14 @@ describe('cubic Hermite interpolant', () => {
   });
 
   it('agrees between the scalar and vector forms', () => {
-    const seg = segmentOf([[Math.exp, Math.exp], [Math.sin, Math.cos]], 0, 0.5);
+    const seg = segmentOf(
+      [
+        [Math.exp, Math.exp],
+        [Math.sin, Math.cos],
+      ],
+      0,
+      0.5,
+    );
     const out = new Float64Array(2);
     hermiteStateAt(seg, 0.21, out);
     expect(out[1]).toBeCloseTo(hermiteComponentAt(seg, 1, 0.21), 15);

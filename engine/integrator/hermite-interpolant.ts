@@ -51,6 +51,10 @@ export function hermiteStateAt(segment: StepSegment, timeS: number, out: Float64
   const a1 = -2 * s3 + 3 * s2;
   const b1 = (s3 - s2) * h;
   for (let i = 0; i < out.length; i += 1) {
-    out[i] = a0 * (y0[i] as number) + b0 * (f0[i] as number) + a1 * (y1[i] as number) + b1 * (f1[i] as number);
+    out[i] =
+      a0 * (y0[i] as number) +
+      b0 * (f0[i] as number) +
+      a1 * (y1[i] as number) +
+      b1 * (f1[i] as number);
   }
 }

@@ -56,4 +56,10 @@ export interface IntegrationStats {
 export type IntegrationOutcome =
   | { status: 'completed'; endS: number; state: Float64Array; stats: IntegrationStats }
   | { status: 'stopped'; endS: number; state: Float64Array; stats: IntegrationStats }
-  | { status: 'failed'; endS: number; state: Float64Array; stats: IntegrationStats; reason: string };
+  | {
+      status: 'failed';
+      endS: number;
+      state: Float64Array;
+      stats: IntegrationStats;
+      reason: string;
+    };

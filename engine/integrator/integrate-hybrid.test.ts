@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { makeCashKarpStepper } from './cash-karp-stepper';
 import type { HybridSystem, TrajectoryObserver } from './hybrid-system';
-import { integrateHybrid, type IntegrateSettings } from './integrate-hybrid';
+import { integrateHybrid } from './integrate-hybrid';
+import type { IntegrateSettings } from './integrate-settings';
 
 function settings(overrides: Partial<IntegrateSettings> = {}): IntegrateSettings {
   return {
@@ -39,7 +40,11 @@ function relaxationOscillator(log: number[]): HybridSystem {
   };
 }
 
-const silent: TrajectoryObserver = { onSegment: () => {}, beforeTransition: () => {}, afterTransition: () => {} };
+const silent: TrajectoryObserver = {
+  onSegment: () => {},
+  beforeTransition: () => {},
+  afterTransition: () => {},
+};
 
 describe('Cash–Karp stepper', () => {
   it('converges with fifth order at a fixed step on y′ = −2ty', () => {
@@ -49,7 +54,12 @@ describe('Cash–Karp stepper', () => {
           out[0] = -2 * t * (y[0] as number);
         },
         1,
-        { relativeTolerance: 1e10, errorFloor: new Float64Array(1), maxStepS: stepS, initialStepS: stepS },
+        {
+          relativeTolerance: 1e10,
+          errorFloor: new Float64Array(1),
+          maxStepS: stepS,
+          initialStepS: stepS,
+        },
       );
       stepper.reset(0, new Float64Array([1]), undefined, stepS);
       while (stepper.timeS < 2) stepper.step(2);
@@ -64,7 +74,12 @@ describe('Cash–Karp stepper', () => {
 describe('integrateHybrid', () => {
   it('locates switching times of a relaxation oscillator to within 1e-7 s of the analytic ones', () => {
     const log: number[] = [];
-    const outcome = integrateHybrid(relaxationOscillator(log), new Float64Array([0.2]), settings(), silent);
+    const outcome = integrateHybrid(
+      relaxationOscillator(log),
+      new Float64Array([0.2]),
+      settings(),
+      silent,
+    );
     expect(outcome.status).toBe('completed');
     const half = Math.log(4);
     expect(log.length).toBe(7);
@@ -93,7 +108,8 @@ describe('integrateHybrid', () => {
       onSegment: (seg) => {
         last = seg.y1[0] as number;
       },
-      beforeTransition: () => {}, afterTransition: () => {},
+      beforeTransition: () => {},
+      afterTransition: () => {},
     });
     expect(outcome.status).toBe('completed');
     expect(times).toEqual([0, 2.5]);
@@ -108,7 +124,8 @@ describe('integrateHybrid', () => {
         starts.push(seg.t0S);
         ends.push(seg.t1S);
       },
-      beforeTransition: () => {}, afterTransition: () => {},
+      beforeTransition: () => {},
+      afterTransition: () => {},
     });
     for (let k = 1; k < starts.length; k += 1) expect(starts[k]).toBe(ends[k - 1]);
     expect(ends[ends.length - 1]).toBe(3);
@@ -170,26 +187,41 @@ describe('integrateHybrid', () => {
         if (fired.length > 0) y[0] = 1e-300;
       },
     };
-    const outcome = integrateHybrid(system, new Float64Array([1]), settings({ maxSteps: 100_000 }), silent);
+    const outcome = integrateHybrid(
+      system,
+      new Float64Array([1]),
+      settings({ maxSteps: 100_000 }),
+      silent,
+    );
     expect(outcome.status).toBe('failed');
     expect(outcome.endS).toBeLessThan(2);
   });
 
   it('stops cooperatively when asked', () => {
     let polls = 0;
-    const outcome = integrateHybrid(relaxationOscillator([]), new Float64Array([0.2]), settings({
-      shouldStop: () => {
-        polls += 1;
-        return polls > 5;
-      },
-    }), silent);
+    const outcome = integrateHybrid(
+      relaxationOscillator([]),
+      new Float64Array([0.2]),
+      settings({
+        shouldStop: () => {
+          polls += 1;
+          return polls > 5;
+        },
+      }),
+      silent,
+    );
     expect(outcome.status).toBe('stopped');
     expect(outcome.endS).toBeGreaterThan(0);
     expect(outcome.endS).toBeLessThan(10);
   });
 
   it('counts steps, rejected steps, evaluations and events', () => {
-    const outcome = integrateHybrid(relaxationOscillator([]), new Float64Array([0.2]), settings(), silent);
+    const outcome = integrateHybrid(
+      relaxationOscillator([]),
+      new Float64Array([0.2]),
+      settings(),
+      silent,
+    );
     expect(outcome.stats.events).toBe(7);
     expect(outcome.stats.steps).toBeGreaterThan(7);
     expect(outcome.stats.rhsEvaluations).toBeGreaterThanOrEqual(5 * outcome.stats.steps);

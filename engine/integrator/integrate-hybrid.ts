@@ -1,31 +1,17 @@
-import { makeCashKarpStepper, type CashKarpStepper, type StepperSettings } from './cash-karp-stepper';
+import { makeCashKarpStepper, type CashKarpStepper } from './cash-karp-stepper';
 import { hermiteStateAt } from './hermite-interpolant';
-import type { HybridSystem, IntegrationOutcome, IntegrationStats, TrajectoryObserver } from './hybrid-system';
+import type { IntegrateSettings } from './integrate-settings';
+import { IntegrationFailure } from './integration-failure';
+import type {
+  HybridSystem,
+  IntegrationOutcome,
+  IntegrationStats,
+  TrajectoryObserver,
+} from './hybrid-system';
 import { locateCrossing } from './locate-crossing';
+import { RestartStepMemory } from './restart-step-memory';
 import { startingStepS } from './starting-step';
 import { makeStepSegment, type StepSegment } from './step-segment';
-
-/** Settings of one hybrid integration. */
-export interface IntegrateSettings extends StepperSettings {
-  /** Start and end time, s. */
-  startS: number;
-  endS: number;
-  /** Event times are located to this fraction of the step that contains them (1e-6). */
-  eventToleranceFraction: number;
-  /** Upper bound on accepted steps; the run fails past it. */
-  maxSteps: number;
-  /** Upper bound on transitions at one instant; more means the modes chatter. */
-  maxTransitionsAtOneInstant: number;
-  /** Polled once per step; true stops the run cooperatively. */
-  shouldStop?: () => boolean;
-  /** Receives the fraction of simulated time done, at most once per percent. */
-  onProgress?: (fraction: number) => void;
-}
-
-/** A failure raised inside the loop and turned into a `failed` outcome. */
-class IntegrationFailure extends Error {
-  readonly code = 'integration-failed';
-}
 
 /**
  * Integrates a hybrid system from `initialState` (copied, not changed) with the adaptive
@@ -52,7 +38,12 @@ class HybridRun {
   private readonly gValues: Float64Array;
   private readonly gScratch: Float64Array;
   private readonly armed: Uint8Array;
-  private readonly stats: IntegrationStats = { steps: 0, rejected: 0, rhsEvaluations: 0, events: 0 };
+  private readonly stats: IntegrationStats = {
+    steps: 0,
+    rejected: 0,
+    rhsEvaluations: 0,
+    events: 0,
+  };
   private timeS: number;
   private readonly y: Float64Array;
   private readonly f: Float64Array;
@@ -63,8 +54,7 @@ class HybridRun {
   private extraEvaluations = 0;
   private naturalStepS = 0;
   private readonly firedScratch: number[] = [];
-  private learning: number[] = [];
-  private readonly learnedStepS: Float64Array;
+  private readonly restartSteps: RestartStepMemory;
 
   constructor(
     private readonly system: HybridSystem,
@@ -81,7 +71,7 @@ class HybridRun {
     this.gValues = new Float64Array(system.eventCount);
     this.gScratch = new Float64Array(system.eventCount);
     this.armed = new Uint8Array(system.eventCount);
-    this.learnedStepS = new Float64Array(system.eventCount);
+    this.restartSteps = new RestartStepMemory(system.eventCount);
     this.timeS = settings.startS;
   }
 
@@ -107,14 +97,15 @@ class HybridRun {
     this.stats.rejected = this.stepper.counters.rejected;
     const stats = { ...this.stats };
     const state = Float64Array.from(this.y);
-    if (status === 'failed') return { status, endS: this.timeS, state, stats, reason: reason ?? 'unknown failure' };
+    if (status === 'failed')
+      return { status, endS: this.timeS, state, stats, reason: reason ?? 'unknown failure' };
     return { status, endS: this.timeS, state, stats };
   }
 
   private evaluate(out: Float64Array, y: Float64Array, timeS: number): void {
     this.extraEvaluations += 1;
     this.system.derivative(out, y, timeS);
-    assertFinite(out, timeS, 'derivative');
+    IntegrationFailure.assertFinite(out, timeS, 'derivative');
   }
 
   /** One accepted step, or a step cut at a located event followed by the transition. */
@@ -124,14 +115,19 @@ class HybridRun {
     let fired = this.firedEvents(seg.y1, seg.t1S);
     this.naturalStepS = this.stepper.nextStepS;
     if (fired.length === 0) {
-      this.learnRestartStep(seg, limitS);
+      this.restartSteps.noteAccepted(seg, limitS);
       this.accept(seg);
     } else {
       this.reintegrateTo(this.locateEarliest(seg, fired));
       fired = this.firedEvents(this.y, this.timeS);
     }
     const timedDue = this.timeS === limitS && limitS < this.settings.endS;
-    if (fired.length > 0 || timedDue) this.applyTransition(fired, timedDue, this.restartStepS(fired));
+    if (fired.length > 0 || timedDue)
+      this.applyTransition(
+        fired,
+        timedDue,
+        this.restartSteps.restartStepS(fired, this.naturalStepS),
+      );
   }
 
   /** Takes one adaptive step from the current point; returns it as a segment. */
@@ -143,7 +139,7 @@ class HybridRun {
     this.stepper.step(limitS);
     seg.t1S = this.stepper.timeS;
     seg.y1.set(this.stepper.state);
-    assertFinite(seg.y1, seg.t1S, 'state');
+    IntegrationFailure.assertFinite(seg.y1, seg.t1S, 'state');
     this.evaluate(seg.f1, seg.y1, seg.t1S);
     this.countStep(seg);
     return seg;
@@ -152,7 +148,9 @@ class HybridRun {
   private countStep(seg: StepSegment): void {
     this.stats.steps += 1;
     if (this.stats.steps > this.settings.maxSteps) {
-      throw new IntegrationFailure(`more than ${this.settings.maxSteps} steps; the system may be too stiff`);
+      throw new IntegrationFailure(
+        `more than ${this.settings.maxSteps} steps; the system may be too stiff`,
+      );
     }
     const length = seg.t1S - seg.t0S;
     this.tinySteps = length <= 1e-13 * Math.max(1, Math.abs(seg.t1S)) ? this.tinySteps + 1 : 0;
@@ -180,7 +178,8 @@ class HybridRun {
     fired.length = 0;
     for (let i = 0; i < this.gValues.length; i += 1) {
       const g = this.gValues[i] as number;
-      if (Number.isNaN(g)) throw new IntegrationFailure(`event function ${i} is NaN at t = ${timeS} s`);
+      if (Number.isNaN(g))
+        throw new IntegrationFailure(`event function ${i} is NaN at t = ${timeS} s`);
       if (this.armed[i] === 1 && g <= 0) fired.push(i);
     }
     return fired;
@@ -221,54 +220,51 @@ class HybridRun {
    * size the integration had before the event (the error test cuts it at once if the new mode is
    * faster), or at the very start with a computed starting step.
    */
-  private applyTransition(fired: readonly number[], timed: boolean, previousStepS: number | undefined): void {
+  private applyTransition(
+    fired: readonly number[],
+    timed: boolean,
+    previousStepS: number | undefined,
+  ): void {
     this.guardChatter();
     this.observer.beforeTransition(this.timeS, this.y);
     this.system.transition(this.timeS, this.y, fired, timed);
-    assertFinite(this.y, this.timeS, 'state after a transition');
+    IntegrationFailure.assertFinite(this.y, this.timeS, 'state after a transition');
     this.observer.afterTransition(this.timeS, this.y);
     this.stats.events += 1;
     this.evaluate(this.f, this.y, this.timeS);
     this.system.eventValues(this.gValues, this.y, this.timeS);
-    for (let i = 0; i < this.gValues.length; i += 1) this.armed[i] = (this.gValues[i] as number) > 0 ? 1 : 0;
+    for (let i = 0; i < this.gValues.length; i += 1)
+      this.armed[i] = (this.gValues[i] as number) > 0 ? 1 : 0;
     this.stepper.reset(this.timeS, this.y, this.f, previousStepS ?? this.startingStep());
-  }
-
-  /**
-   * The step to restart with after the transition fired by `fired`: the step before the event,
-   * but no longer than the first step that was accepted after the same event last time (the new
-   * mode's own time scale, e.g. the small steps a weir needs just after it starts to spill).
-   */
-  private restartStepS(fired: readonly number[]): number {
-    let stepS = this.naturalStepS;
-    for (const index of fired) {
-      const learned = this.learnedStepS[index] as number;
-      if (learned > 0) stepS = Math.min(stepS, learned);
-    }
-    this.learning = fired.slice();
-    return stepS;
-  }
-
-  /** Remembers the first full step accepted after a transition, per event that fired it. */
-  private learnRestartStep(seg: StepSegment, limitS: number): void {
-    if (this.learning.length === 0) return;
-    if (seg.t1S < limitS) for (const index of this.learning) this.learnedStepS[index] = seg.t1S - seg.t0S;
-    this.learning = [];
   }
 
   private startingStep(): number {
     this.extraEvaluations += 1;
     const { relativeTolerance, errorFloor, maxStepS } = this.settings;
-    const rhs = (out: Float64Array, y: Float64Array, t: number): void => this.system.derivative(out, y, t);
-    return startingStepS(rhs, this.timeS, this.y, this.f, relativeTolerance, errorFloor, maxStepS, this.scratchState, this.segment.f1);
+    const rhs = (out: Float64Array, y: Float64Array, t: number): void =>
+      this.system.derivative(out, y, t);
+    return startingStepS(
+      rhs,
+      this.timeS,
+      this.y,
+      this.f,
+      relativeTolerance,
+      errorFloor,
+      maxStepS,
+      this.scratchState,
+      this.segment.f1,
+    );
   }
 
   /** Fails when the modes keep switching without time advancing. */
   private guardChatter(): void {
-    this.transitionsAtInstant = this.timeS === this.lastTransitionS ? this.transitionsAtInstant + 1 : 0;
+    this.transitionsAtInstant =
+      this.timeS === this.lastTransitionS ? this.transitionsAtInstant + 1 : 0;
     this.lastTransitionS = this.timeS;
     if (this.transitionsAtInstant > this.settings.maxTransitionsAtOneInstant) {
-      throw new IntegrationFailure(`modes keep switching at t = ${this.timeS} s without time advancing`);
+      throw new IntegrationFailure(
+        `modes keep switching at t = ${this.timeS} s without time advancing`,
+      );
     }
   }
 
@@ -279,14 +275,5 @@ class HybridRun {
     if (fraction < this.nextProgress && fraction < 1) return;
     onProgress(Math.min(1, fraction));
     this.nextProgress = Math.floor(fraction * 100 + 1) / 100;
-  }
-}
-
-/** Throws an IntegrationFailure naming the first non-finite component. */
-function assertFinite(values: Float64Array, timeS: number, what: string): void {
-  for (let i = 0; i < values.length; i += 1) {
-    if (!Number.isFinite(values[i])) {
-      throw new IntegrationFailure(`${what} component ${i} is not finite at t = ${timeS} s`);
-    }
   }
 }

@@ -17,7 +17,8 @@ export function startingStepS(
   probe: Float64Array,
   probeDerivative: Float64Array,
 ): number {
-  const scale = (i: number): number => tolerance * (Math.abs(y[i] as number) + (errorFloor[i] ?? 0) + 1e-300);
+  const scale = (i: number): number =>
+    tolerance * (Math.abs(y[i] as number) + (errorFloor[i] ?? 0) + 1e-300);
   let d0 = 0;
   let d1 = 0;
   for (let i = 0; i < y.length; i += 1) {
@@ -29,7 +30,8 @@ export function startingStepS(
   for (let i = 0; i < y.length; i += 1) probe[i] = (y[i] as number) + h0 * (f[i] as number);
   rhs(probeDerivative, probe, timeS + h0);
   let d2 = 0;
-  for (let i = 0; i < y.length; i += 1) d2 = Math.max(d2, Math.abs((probeDerivative[i] as number) - (f[i] as number)) / scale(i) / h0);
+  for (let i = 0; i < y.length; i += 1)
+    d2 = Math.max(d2, Math.abs((probeDerivative[i] as number) - (f[i] as number)) / scale(i) / h0);
   const biggest = Math.max(d1, d2);
   const h1 = biggest > 1e-15 ? (0.01 / biggest) ** 0.2 : Math.max(1e-6, h0 * 1e-3);
   return Math.min(100 * h0, h1, maxStepS);

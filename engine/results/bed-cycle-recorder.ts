@@ -27,7 +27,8 @@ export class BedCycleRecorder implements TrajectoryObserver {
     private readonly bedIndex: ReadonlyMap<string, number>,
     private readonly extremes: readonly LevelExtremes[],
   ) {
-    for (const id of bedIndex.keys()) this.marks.set(id, { spillStartsS: [], highsM: [], lowsM: [] });
+    for (const id of bedIndex.keys())
+      this.marks.set(id, { spillStartsS: [], highsM: [], lowsM: [] });
   }
 
   onSegment(): void {}
@@ -46,7 +47,10 @@ export class BedCycleRecorder implements TrajectoryObserver {
         marks.spillStartsS.push(event.t_s);
         window.windowMinM = Infinity;
         window.windowMaxM = -Infinity;
-      } else if ((event.kind === 'primed' || event.kind === 'spill-end') && marks.highsM.length < marks.spillStartsS.length) {
+      } else if (
+        (event.kind === 'primed' || event.kind === 'spill-end') &&
+        marks.highsM.length < marks.spillStartsS.length
+      ) {
         marks.highsM.push(window.windowMaxM);
       }
     }

@@ -5,22 +5,35 @@ import type { BedCycleMarks } from './bed-cycle-recorder';
 import type { BedState, BedSummary, RunEvent } from './run-result';
 
 /** Mean, min and max of a list, or nulls when it is empty. */
-function statistics(values: readonly number[]): { mean: number | null; min: number | null; max: number | null } {
+function statistics(values: readonly number[]): {
+  mean: number | null;
+  min: number | null;
+  max: number | null;
+} {
   if (values.length === 0) return { mean: null, min: null, max: null };
   let sum = 0;
   for (const v of values) sum += v;
   return { mean: sum / values.length, min: Math.min(...values), max: Math.max(...values) };
 }
 
-const differences = (times: readonly number[]): number[] => times.slice(1).map((t, i) => t - (times[i] as number));
-const timesOf = (events: readonly RunEvent[], where: string, kind: string): number[] => events.filter((e) => e.where === where && e.kind === kind).map((e) => e.t_s);
+const differences = (times: readonly number[]): number[] =>
+  times.slice(1).map((t, i) => t - (times[i] as number));
+const timesOf = (events: readonly RunEvent[], where: string, kind: string): number[] =>
+  events.filter((e) => e.where === where && e.kind === kind).map((e) => e.t_s);
 
 /**
  * Cycle statistics of a bell-siphon bed: a cycle is a priming followed by its break. Period =
  * time between successive primings; flood time = previous break to priming; drain time =
  * priming to break; high and low water per cycle from the recorded marks.
  */
-export function summariseBellBed(bell: BellSiphonComponent, bed: VesselComponent, events: readonly RunEvent[], marks: BedCycleMarks, endS: number, durationS: number): BedSummary {
+export function summariseBellBed(
+  bell: BellSiphonComponent,
+  bed: VesselComponent,
+  events: readonly RunEvent[],
+  marks: BedCycleMarks,
+  endS: number,
+  durationS: number,
+): BedSummary {
   const primes = timesOf(events, bell.bedId, 'primed');
   const breaks = timesOf(events, bell.bedId, 'siphon-break');
   const drains: number[] = [];
@@ -63,7 +76,14 @@ function bellState(bell: BellSiphonComponent, bed: VesselComponent, cycles: numb
  * not defined (null). `openLowM` is the lowest level since the last spill-start (the drain still
  * under way when the run ends).
  */
-export function summariseStandpipeBed(standpipe: StandpipeComponent, events: readonly RunEvent[], marks: BedCycleMarks, openLowM: number, endS: number, durationS: number): BedSummary {
+export function summariseStandpipeBed(
+  standpipe: StandpipeComponent,
+  events: readonly RunEvent[],
+  marks: BedCycleMarks,
+  openLowM: number,
+  endS: number,
+  durationS: number,
+): BedSummary {
   const starts = timesOf(events, standpipe.bedId, 'spill-start');
   const ends = timesOf(events, standpipe.bedId, 'spill-end');
   const halfCrestM = 0.5 * standpipe.drain.standpipe.height;
@@ -78,7 +98,8 @@ export function summariseStandpipeBed(standpipe: StandpipeComponent, events: rea
     const end = ends.find((e) => e >= start);
     spilling += (end ?? endS) - start;
     high = Math.max(high, marks.highsM[i] ?? -Infinity);
-    const low = i < marks.lowsM.length ? marks.lowsM[i] : i === starts.length - 1 ? openLowM : undefined;
+    const low =
+      i < marks.lowsM.length ? marks.lowsM[i] : i === starts.length - 1 ? openLowM : undefined;
     if (low === undefined || low >= halfCrestM) return;
     floods.push(spilling);
     highs.push(high);
@@ -89,7 +110,8 @@ export function summariseStandpipeBed(standpipe: StandpipeComponent, events: rea
     if (next !== undefined) floodStarts.push(next);
   });
   const period = statistics(differences(floodStarts));
-  const flooded = standpipe.floodedTimeS + (standpipe.phase === 'spilling' ? endS - standpipe.phaseStartS : 0);
+  const flooded =
+    standpipe.floodedTimeS + (standpipe.phase === 'spilling' ? endS - standpipe.phaseStartS : 0);
   const cycles = floods.length;
   return {
     id: standpipe.bedId,
@@ -102,6 +124,11 @@ export function summariseStandpipeBed(standpipe: StandpipeComponent, events: rea
     highLevel_m: statistics(highs).mean,
     lowLevel_m: statistics(lows).mean,
     fractionFlooded: durationS > 0 ? flooded / durationS : 0,
-    state: cycles >= 2 ? 'cycling' : standpipe.phase === 'spilling' || starts.length > 0 ? 'flooded' : 'idle',
+    state:
+      cycles >= 2
+        ? 'cycling'
+        : standpipe.phase === 'spilling' || starts.length > 0
+          ? 'flooded'
+          : 'idle',
   };
 }

@@ -25,7 +25,14 @@ export class LevelExtremesTracker implements TrajectoryObserver {
   readonly extremes: LevelExtremes[];
 
   constructor(private readonly vessels: readonly VesselComponent[]) {
-    this.extremes = vessels.map(() => ({ minLevelM: Infinity, minAtS: 0, maxLevelM: -Infinity, maxAtS: 0, windowMinM: Infinity, windowMaxM: -Infinity }));
+    this.extremes = vessels.map(() => ({
+      minLevelM: Infinity,
+      minAtS: 0,
+      maxLevelM: -Infinity,
+      maxAtS: 0,
+      windowMinM: Infinity,
+      windowMaxM: -Infinity,
+    }));
   }
 
   onSegment(segment: StepSegment): void {
@@ -72,7 +79,11 @@ export class LevelExtremesTracker implements TrajectoryObserver {
     if (s === undefined) return;
     const s2 = s * s;
     const s3 = s2 * s;
-    const value = (2 * s3 - 3 * s2 + 1) * y0 + (s3 - 2 * s2 + s) * d0 + (-2 * s3 + 3 * s2) * y1 + (s3 - s2) * d1;
+    const value =
+      (2 * s3 - 3 * s2 + 1) * y0 +
+      (s3 - 2 * s2 + s) * d0 +
+      (-2 * s3 + 3 * s2) * y1 +
+      (s3 - s2) * d1;
     this.note(vessel, value, segment.t0S + s * h);
   }
 }

@@ -23,21 +23,44 @@ const BELL_PHASE_CODE = { filling: 0, spilling: 1, siphoning: 3 } as const;
 export function makeSeriesProbe(model: SystemModel): SeriesProbe {
   const { vessels, channels, pumps, bells, standpipes } = model.parts;
   const specs: ChannelSpec[] = [
-    ...vessels.map((v): ChannelSpec => ({ id: `level:${v.vessel.id}`, kind: 'level', where: v.vessel.id, unit: 'm' })),
-    ...vessels.map((v): ChannelSpec => ({ id: `volume:${v.vessel.id}`, kind: 'volume', where: v.vessel.id, unit: 'm3' })),
+    ...vessels.map((v): ChannelSpec => ({
+      id: `level:${v.vessel.id}`,
+      kind: 'level',
+      where: v.vessel.id,
+      unit: 'm',
+    })),
+    ...vessels.map((v): ChannelSpec => ({
+      id: `volume:${v.vessel.id}`,
+      kind: 'volume',
+      where: v.vessel.id,
+      unit: 'm3',
+    })),
     ...channels.map((c): ChannelSpec => ({ id: c.id, kind: 'flow', where: c.where, unit: 'm3/s' })),
     ...pumps.flatMap((p): ChannelSpec[] => [
       { id: `flow:${p.id}`, kind: 'flow', where: p.id, unit: 'm3/s' },
       { id: `head:${p.id}`, kind: 'head', where: p.id, unit: 'm' },
       { id: `power:${p.id}`, kind: 'power', where: p.id, unit: 'W' },
     ]),
-    ...bells.map((b): ChannelSpec => ({ id: `phase:${b.bedId}`, kind: 'phase', where: b.bedId, unit: '' })),
-    ...standpipes.map((s): ChannelSpec => ({ id: `phase:${s.bedId}`, kind: 'phase', where: s.bedId, unit: '' })),
+    ...bells.map((b): ChannelSpec => ({
+      id: `phase:${b.bedId}`,
+      kind: 'phase',
+      where: b.bedId,
+      unit: '',
+    })),
+    ...standpipes.map((s): ChannelSpec => ({
+      id: `phase:${s.bedId}`,
+      kind: 'phase',
+      where: s.bedId,
+      unit: '',
+    })),
   ];
   const firstPhase = specs.length - bells.length - standpipes.length;
   return {
     specs,
-    phaseChannels: Array.from({ length: bells.length + standpipes.length }, (_, i) => firstPhase + i),
+    phaseChannels: Array.from(
+      { length: bells.length + standpipes.length },
+      (_, i) => firstPhase + i,
+    ),
     sample: (y, timeS, out) => {
       const ctx = model.flowsAt(y, timeS);
       let k = 0;

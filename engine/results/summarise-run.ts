@@ -18,24 +18,48 @@ export interface RunRecord {
 }
 
 /** Builds the summary, verdicts and mass-balance error of a run (series and stats are added by the caller). */
-export function summariseRun(record: RunRecord): Pick<SimulationResult, 'summary' | 'verdicts' | 'massBalanceError'> {
+export function summariseRun(
+  record: RunRecord,
+): Pick<SimulationResult, 'summary' | 'verdicts' | 'massBalanceError'> {
   const { model, finalState, startS, endS } = record;
   const { layout, vessels, scenario } = model.parts;
   const durationS = endS - startS;
   const beds = summariseBeds(record, durationS);
   const vesselSummaries = vessels.map((vessel): VesselSummary => {
     const e = record.extremes[vessel.index] as LevelExtremes;
-    const lost = layout.sinks.filter((s) => s.vesselId === vessel.vessel.id).reduce((sum, s) => sum + (finalState[s.index] as number), 0);
-    return { id: vessel.vessel.id, minLevel_m: e.minLevelM, minLevelAt_s: e.minAtS, maxLevel_m: e.maxLevelM, maxLevelAt_s: e.maxAtS, lost_m3: lost };
+    const lost = layout.sinks
+      .filter((s) => s.vesselId === vessel.vessel.id)
+      .reduce((sum, s) => sum + (finalState[s.index] as number), 0);
+    return {
+      id: vessel.vessel.id,
+      minLevel_m: e.minLevelM,
+      minLevelAt_s: e.minAtS,
+      maxLevel_m: e.maxLevelM,
+      maxLevelAt_s: e.maxAtS,
+      lost_m3: lost,
+    };
   });
   const pumps = summarisePumps(record, durationS);
-  const lostBy = (kind: 'rim' | 'overflow' | 'leak'): number => layout.sinks.filter((s) => s.kind === kind).reduce((sum, s) => sum + (finalState[s.index] as number), 0);
+  const lostBy = (kind: 'rim' | 'overflow' | 'leak'): number =>
+    layout.sinks
+      .filter((s) => s.kind === kind)
+      .reduce((sum, s) => sum + (finalState[s.index] as number), 0);
   const capacityM3 = vessels.reduce((sum, v) => sum + v.geometry.rimVolumeM3, 0);
   const error = massBalanceError(layout, record.initialState, finalState, capacityM3);
-  const tankVolumeM3 = vessels.filter((v) => v.vessel.kind === 'tank').reduce((sum, v) => sum + (record.initialState[v.index] as number), 0);
+  const tankVolumeM3 = vessels
+    .filter((v) => v.vessel.kind === 'tank')
+    .reduce((sum, v) => sum + (record.initialState[v.index] as number), 0);
   const verdicts = makeVerdicts({
-    scenario, beds, vessels: vesselSummaries, pumps, durationS, massBalanceError: error, tankVolumeM3,
-    lostOverRimsM3: lostBy('rim'), lostThroughOverflowsM3: lostBy('overflow'), lostThroughLeaksM3: lostBy('leak'),
+    scenario,
+    beds,
+    vessels: vesselSummaries,
+    pumps,
+    durationS,
+    massBalanceError: error,
+    tankVolumeM3,
+    lostOverRimsM3: lostBy('rim'),
+    lostThroughOverflowsM3: lostBy('overflow'),
+    lostThroughLeaksM3: lostBy('leak'),
   });
   return { summary: { beds, vessels: vesselSummaries, pumps }, verdicts, massBalanceError: error };
 }
@@ -47,11 +71,32 @@ function summariseBeds(record: RunRecord, durationS: number): BedSummary[] {
   const byId = new Map<string, BedSummary>();
   for (const bell of bells) {
     const bed = vessels[bell.wiring.bed.index];
-    if (bed) byId.set(bell.bedId, summariseBellBed(bell, bed, model.events, cycleMarks.get(bell.bedId) ?? emptyMarks, endS, durationS));
+    if (bed)
+      byId.set(
+        bell.bedId,
+        summariseBellBed(
+          bell,
+          bed,
+          model.events,
+          cycleMarks.get(bell.bedId) ?? emptyMarks,
+          endS,
+          durationS,
+        ),
+      );
   }
   for (const standpipe of standpipes) {
     const openLowM = record.extremes[standpipe.wiring.bed.index]?.windowMinM ?? Infinity;
-    byId.set(standpipe.bedId, summariseStandpipeBed(standpipe, model.events, cycleMarks.get(standpipe.bedId) ?? emptyMarks, openLowM, endS, durationS));
+    byId.set(
+      standpipe.bedId,
+      summariseStandpipeBed(
+        standpipe,
+        model.events,
+        cycleMarks.get(standpipe.bedId) ?? emptyMarks,
+        openLowM,
+        endS,
+        durationS,
+      ),
+    );
   }
   return model.parts.scenario.vessels.flatMap((v) => byId.get(v.id) ?? []);
 }

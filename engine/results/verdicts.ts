@@ -2,7 +2,8 @@ import type { Scenario } from '../../shared/scenario';
 import type { BedSummary, PumpSummary, Verdict, VesselSummary } from './run-result';
 
 const PRACTICE = 'common practice';
-const PRIMING_SOURCE = 'model: priming at Q_prime = k_p·√(g·D_s⁵), k_p by analogy with drain stacks (Wyly & Eaton, NBS BMS 132, 1952); calibrate k_p from measured cycles';
+const PRIMING_SOURCE =
+  'model: priming at Q_prime = k_p·√(g·D_s⁵), k_p by analogy with drain stacks (Wyly & Eaton, NBS BMS 132, 1952); calibrate k_p from measured cycles';
 
 /** Everything the design checks look at. */
 export interface VerdictInputs {
@@ -22,7 +23,13 @@ export interface VerdictInputs {
 
 /** The design checks of a run, each with its value, its limit and where the limit comes from. */
 export function makeVerdicts(inputs: VerdictInputs): Verdict[] {
-  return [...bedVerdicts(inputs), ...vesselVerdicts(inputs), ...pumpVerdicts(inputs), ...lossVerdicts(inputs), ...modelVerdicts(inputs)];
+  return [
+    ...bedVerdicts(inputs),
+    ...vesselVerdicts(inputs),
+    ...pumpVerdicts(inputs),
+    ...lossVerdicts(inputs),
+    ...modelVerdicts(inputs),
+  ];
 }
 
 function bedVerdicts({ scenario, beds }: VerdictInputs): Verdict[] {
@@ -31,7 +38,12 @@ function bedVerdicts({ scenario, beds }: VerdictInputs): Verdict[] {
     const bell = vessel?.kind === 'bed' && vessel.drain.type === 'bell-siphon';
     const regime: Verdict = {
       check: `${bed.id}: drains and refills`,
-      status: bed.state === 'cycling' || (!bell && bed.state === 'flooded') ? 'ok' : bed.state === 'spill-stall' || bed.state === 'siphon-lock' ? 'fails' : 'warning',
+      status:
+        bed.state === 'cycling' || (!bell && bed.state === 'flooded')
+          ? 'ok'
+          : bed.state === 'spill-stall' || bed.state === 'siphon-lock'
+            ? 'fails'
+            : 'warning',
       value: bed.state,
       limit: bell ? 'cycling' : 'cycling or flooded',
       source: bell ? PRIMING_SOURCE : PRACTICE,
@@ -53,13 +65,15 @@ function vesselVerdicts({ scenario, vessels }: VerdictInputs): Verdict[] {
   return scenario.vessels.flatMap((vessel): Verdict[] => {
     const summary = vessels.find((v) => v.id === vessel.id);
     if (vessel.minLevel === undefined || summary === undefined) return [];
-    return [{
-      check: `${vessel.id}: stays above its fish-safe minimum level (m)`,
-      status: summary.minLevel_m >= vessel.minLevel ? 'ok' : 'fails',
-      value: round(summary.minLevel_m),
-      limit: vessel.minLevel,
-      source: `${PRACTICE} (minimum set by the designer)`,
-    }];
+    return [
+      {
+        check: `${vessel.id}: stays above its fish-safe minimum level (m)`,
+        status: summary.minLevel_m >= vessel.minLevel ? 'ok' : 'fails',
+        value: round(summary.minLevel_m),
+        limit: vessel.minLevel,
+        source: `${PRACTICE} (minimum set by the designer)`,
+      },
+    ];
   });
 }
 
@@ -78,7 +92,8 @@ function pumpVerdicts({ pumps, durationS, tankVolumeM3: tankVolume }: VerdictInp
     status: pumpedPerHour / tankVolume >= 1 ? 'ok' : 'warning',
     value: round(pumpedPerHour / tankVolume),
     limit: 1,
-    source: 'FAO Fisheries and Aquaculture Technical Paper 589 (Somerville et al., 2014), ch. 8 (from memory)',
+    source:
+      'FAO Fisheries and Aquaculture Technical Paper 589 (Somerville et al., 2014), ch. 8 (from memory)',
   };
   return [...dry, turnover];
 }
@@ -86,11 +101,29 @@ function pumpVerdicts({ pumps, durationS, tankVolumeM3: tankVolume }: VerdictInp
 function lossVerdicts(inputs: VerdictInputs): Verdict[] {
   const { scenario, lostOverRimsM3, lostThroughOverflowsM3, lostThroughLeaksM3 } = inputs;
   const verdicts: Verdict[] = [
-    { check: 'no water spills over a rim (L)', status: lostOverRimsM3 > 0 ? 'fails' : 'ok', value: round(lostOverRimsM3 * 1000), limit: 0, source: PRACTICE },
-    { check: 'no water leaves through overflows to the outside (L)', status: lostThroughOverflowsM3 > 0 ? 'warning' : 'ok', value: round(lostThroughOverflowsM3 * 1000), limit: 0, source: PRACTICE },
+    {
+      check: 'no water spills over a rim (L)',
+      status: lostOverRimsM3 > 0 ? 'fails' : 'ok',
+      value: round(lostOverRimsM3 * 1000),
+      limit: 0,
+      source: PRACTICE,
+    },
+    {
+      check: 'no water leaves through overflows to the outside (L)',
+      status: lostThroughOverflowsM3 > 0 ? 'warning' : 'ok',
+      value: round(lostThroughOverflowsM3 * 1000),
+      limit: 0,
+      source: PRACTICE,
+    },
   ];
   if (scenario.leaks.length > 0) {
-    verdicts.push({ check: 'water lost through leaks (L)', status: lostThroughLeaksM3 > 0 ? 'warning' : 'ok', value: round(lostThroughLeaksM3 * 1000), limit: 0, source: PRACTICE });
+    verdicts.push({
+      check: 'water lost through leaks (L)',
+      status: lostThroughLeaksM3 > 0 ? 'warning' : 'ok',
+      value: round(lostThroughLeaksM3 * 1000),
+      limit: 0,
+      source: PRACTICE,
+    });
   }
   scenario.leaks.forEach((leak, k) => {
     const vessel = scenario.vessels.find((v) => v.id === leak.from);
@@ -109,13 +142,15 @@ function lossVerdicts(inputs: VerdictInputs): Verdict[] {
 }
 
 function modelVerdicts({ scenario, massBalanceError }: VerdictInputs): Verdict[] {
-  const verdicts: Verdict[] = [{
-    check: 'water is conserved by the simulation (relative error)',
-    status: massBalanceError < 1e-6 ? 'ok' : 'warning',
-    value: massBalanceError,
-    limit: 1e-6,
-    source: 'conservation of mass (numerical check)',
-  }];
+  const verdicts: Verdict[] = [
+    {
+      check: 'water is conserved by the simulation (relative error)',
+      status: massBalanceError < 1e-6 ? 'ok' : 'warning',
+      value: massBalanceError,
+      limit: 1e-6,
+      source: 'conservation of mass (numerical check)',
+    },
+  ];
   const t = scenario.water.temperature;
   if (scenario.run.friction === 'hazen-williams') {
     verdicts.push({
@@ -123,7 +158,8 @@ function modelVerdicts({ scenario, massBalanceError }: VerdictInputs): Verdict[]
       status: t >= 15 && t <= 25 ? 'ok' : 'warning',
       value: t,
       limit: '15–25',
-      source: 'Hazen–Williams is fitted to water near room temperature in larger pipes; Darcy–Weisbach is the default',
+      source:
+        'Hazen–Williams is fitted to water near room temperature in larger pipes; Darcy–Weisbach is the default',
     });
   }
   return verdicts;

@@ -30,7 +30,11 @@ export class StallMonitor {
   private readonly watches: Watch[];
 
   constructor(private readonly model: SystemModel) {
-    this.watches = model.parts.bells.map(() => ({ phaseStartS: Number.NaN, balanceSinceS: Number.NaN, settledSinceS: Number.NaN }));
+    this.watches = model.parts.bells.map(() => ({
+      phaseStartS: Number.NaN,
+      balanceSinceS: Number.NaN,
+      settledSinceS: Number.NaN,
+    }));
   }
 
   /** Checks the end of an accepted step. */
@@ -56,36 +60,80 @@ export class StallMonitor {
     const inflow = ctx.inflowM3PerS[index] as number;
     const level = ctx.levelM[index] as number;
     const spilling = bell.phase === 'spilling';
-    const threshold = spilling ? bell.primingFlowM3PerS : bell.siphonFlowAtLevel(ctx, bell.breakLevelM);
+    const threshold = spilling
+      ? bell.primingFlowM3PerS
+      : bell.siphonFlowAtLevel(ctx, bell.breakLevelM);
     const balance = inflow > 0 && (spilling ? inflow < threshold : inflow >= threshold);
-    const settled = inflow > 0 && Math.abs(segment.f1[index] as number) <= SETTLED_FRACTION * inflow;
-    watch.balanceSinceS = balance ? (Number.isNaN(watch.balanceSinceS) ? t : watch.balanceSinceS) : Number.NaN;
-    watch.settledSinceS = settled ? (Number.isNaN(watch.settledSinceS) ? t : watch.settledSinceS) : Number.NaN;
+    const settled =
+      inflow > 0 && Math.abs(segment.f1[index] as number) <= SETTLED_FRACTION * inflow;
+    watch.balanceSinceS = balance
+      ? Number.isNaN(watch.balanceSinceS)
+        ? t
+        : watch.balanceSinceS
+      : Number.NaN;
+    watch.settledSinceS = settled
+      ? Number.isNaN(watch.settledSinceS)
+        ? t
+        : watch.settledSinceS
+      : Number.NaN;
     const byBalance = t - watch.balanceSinceS >= STALL_WINDOW_S;
     const byTrajectory = t - watch.settledSinceS >= STALL_WINDOW_S;
     if (!byBalance && !byTrajectory) return;
-    const detectedBy = [byBalance ? 'flow balance' : '', byTrajectory ? 'trajectory' : ''].filter(Boolean).join(' and ');
+    const detectedBy = [byBalance ? 'flow balance' : '', byTrajectory ? 'trajectory' : '']
+      .filter(Boolean)
+      .join(' and ');
     bell.stall = spilling ? 'spill-stall' : 'siphon-lock';
-    this.model.events.push(spilling ? spillStallEvent(bell, t, inflow, level, detectedBy) : siphonLockEvent(bell, t, inflow, threshold, level, detectedBy));
+    this.model.events.push(
+      spilling
+        ? spillStallEvent(bell, t, inflow, level, detectedBy)
+        : siphonLockEvent(bell, t, inflow, threshold, level, detectedBy),
+    );
   }
 }
 
 const perMin = (flowM3PerS: number): string => `${fmt(flowM3PerS * 60000, 3)} L/min`;
 
-function spillStallEvent(bell: BellSiphonComponent, t: number, inflow: number, level: number, detectedBy: string) {
+function spillStallEvent(
+  bell: BellSiphonComponent,
+  t: number,
+  inflow: number,
+  level: number,
+  detectedBy: string,
+) {
   const cure = bell.primingFlowM3PerS - inflow;
   return {
-    t_s: t, kind: 'spill-stall', where: bell.bedId,
+    t_s: t,
+    kind: 'spill-stall',
+    where: bell.bedId,
     detail: `The siphon never primes: the inflow ${perMin(inflow)} stays below the priming flow ${perMin(bell.primingFlowM3PerS)}, so the bed trickles over the standpipe at ${fmt(level)} m (found by ${detectedBy}). Raise the inflow by at least ${perMin(Math.max(cure, 0))}, or use a narrower standpipe.`,
-    values: { inflowM3PerS: inflow, primingFlowM3PerS: bell.primingFlowM3PerS, cureInflowIncreaseM3PerS: cure, levelM: level },
+    values: {
+      inflowM3PerS: inflow,
+      primingFlowM3PerS: bell.primingFlowM3PerS,
+      cureInflowIncreaseM3PerS: cure,
+      levelM: level,
+    },
   };
 }
 
-function siphonLockEvent(bell: BellSiphonComponent, t: number, inflow: number, siphonAtBreak: number, level: number, detectedBy: string) {
+function siphonLockEvent(
+  bell: BellSiphonComponent,
+  t: number,
+  inflow: number,
+  siphonAtBreak: number,
+  level: number,
+  detectedBy: string,
+) {
   const cure = inflow - siphonAtBreak;
   return {
-    t_s: t, kind: 'siphon-lock', where: bell.bedId,
+    t_s: t,
+    kind: 'siphon-lock',
+    where: bell.bedId,
     detail: `The siphon never breaks: the inflow ${perMin(inflow)} is at least the siphon's flow at the break level, ${perMin(siphonAtBreak)}, so the level holds at ${fmt(level)} m (found by ${detectedBy}). Cut the inflow by at least ${perMin(Math.max(cure, 0))}, or raise the intake.`,
-    values: { inflowM3PerS: inflow, siphonFlowAtBreakM3PerS: siphonAtBreak, cureInflowDecreaseM3PerS: cure, levelM: level },
+    values: {
+      inflowM3PerS: inflow,
+      siphonFlowAtBreakM3PerS: siphonAtBreak,
+      cureInflowDecreaseM3PerS: cure,
+      levelM: level,
+    },
   };
 }

@@ -43,14 +43,20 @@ export function makeStateLayout(scenario: Scenario): StateLayout {
   const vesselIndex = new Map(scenario.vessels.map((vessel) => [vessel.id, take()]));
   const drainHeldIndex = new Map<string, number>();
   for (const vessel of scenario.vessels) {
-    if (vessel.kind === 'bed' && vessel.drain.type === 'bell-siphon') drainHeldIndex.set(vessel.id, take());
+    if (vessel.kind === 'bed' && vessel.drain.type === 'bell-siphon')
+      drainHeldIndex.set(vessel.id, take());
   }
   const lineHeldIndex = new Map(scenario.pumps.map((pump) => [pump.id, take()]));
   const sinks: LossSink[] = [];
   for (const vessel of scenario.vessels) {
     sinks.push({ index: take(), vesselId: vessel.id, kind: 'rim', label: `${vessel.id} rim` });
     if (vessel.overflow?.to === 'out') {
-      sinks.push({ index: take(), vesselId: vessel.id, kind: 'overflow', label: `${vessel.id} overflow` });
+      sinks.push({
+        index: take(),
+        vesselId: vessel.id,
+        kind: 'overflow',
+        label: `${vessel.id} overflow`,
+      });
     }
   }
   scenario.leaks.forEach((leak, k) => {

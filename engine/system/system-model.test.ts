@@ -5,7 +5,9 @@ import { parseScenario, type Scenario } from '../../shared/scenario';
 import { SystemModel } from './system-model';
 
 function load(name: string): Scenario {
-  const parsed = parseScenario(JSON.parse(readFileSync(join(__dirname, '../../scenarios', name), 'utf8')));
+  const parsed = parseScenario(
+    JSON.parse(readFileSync(join(__dirname, '../../scenarios', name), 'utf8')),
+  );
   if (!parsed.success) throw new Error(name);
   return parsed.scenario;
 }
@@ -28,7 +30,8 @@ describe('SystemModel', () => {
     const dy = new Float64Array(model.stateSize);
     for (let trial = 0; trial < 50; trial += 1) {
       const state = Float64Array.from(y);
-      for (const vessel of model.parts.vessels) state[vessel.index] = next() * vessel.geometry.rimVolumeM3;
+      for (const vessel of model.parts.vessels)
+        state[vessel.index] = next() * vessel.geometry.rimVolumeM3;
       model.derivative(dy, state, trial);
       let sum = 0;
       let scale = 0;
@@ -46,11 +49,32 @@ describe('SystemModel', () => {
       format: 'scenario/1',
       name: 'pump into a full tank',
       vessels: [
-        { id: 'low', kind: 'tank', shape: { type: 'box', length: 1, width: 1 }, height: 1, initialLevel: 0.8 },
-        { id: 'high', kind: 'tank', shape: { type: 'box', length: 0.5, width: 0.5 }, floorElevation: 1.2, height: 0.4, initialLevel: 0.4 },
+        {
+          id: 'low',
+          kind: 'tank',
+          shape: { type: 'box', length: 1, width: 1 },
+          height: 1,
+          initialLevel: 0.8,
+        },
+        {
+          id: 'high',
+          kind: 'tank',
+          shape: { type: 'box', length: 0.5, width: 0.5 },
+          floorElevation: 1.2,
+          height: 0.4,
+          initialLevel: 0.4,
+        },
       ],
-      pumps: [{ id: 'p', in: 'low', maxHead: 3, maxFlow: '1000 L/h', main: { length: 1, innerDiameter: 0.02 },
-        outlets: [{ to: 'high', elevation: 1.7, pipe: { length: 1, innerDiameter: 0.02 } }] }],
+      pumps: [
+        {
+          id: 'p',
+          in: 'low',
+          maxHead: 3,
+          maxFlow: '1000 L/h',
+          main: { length: 1, innerDiameter: 0.02 },
+          outlets: [{ to: 'high', elevation: 1.7, pipe: { length: 1, innerDiameter: 0.02 } }],
+        },
+      ],
     });
     if (!parsed.success) throw new Error(JSON.stringify(parsed.issues));
     const model = new SystemModel(parsed.scenario);

@@ -58,7 +58,8 @@ export class SystemModel implements HybridSystem {
   /** The state at the start: vessel volumes at their initial levels, everything else zero. */
   initialState(): Float64Array {
     const y = new Float64Array(this.stateSize);
-    for (const vessel of this.parts.vessels) y[vessel.index] = vessel.geometry.volumeAtLevelM3(vessel.vessel.initialLevel);
+    for (const vessel of this.parts.vessels)
+      y[vessel.index] = vessel.geometry.volumeAtLevelM3(vessel.vessel.initialLevel);
     return y;
   }
 
@@ -79,7 +80,8 @@ export class SystemModel implements HybridSystem {
 
   eventValues(out: Float64Array, y: Float64Array, timeS: number): void {
     let needsFlows = false;
-    for (const vessel of this.parts.vessels) needsFlows = needsFlows || vessel.brimful || vessel.empty;
+    for (const vessel of this.parts.vessels)
+      needsFlows = needsFlows || vessel.brimful || vessel.empty;
     const ctx = needsFlows ? this.evaluate(y, timeS) : this.evaluateLevels(y, timeS);
     for (const component of this.parts.components) component.eventValues(ctx, out);
   }
@@ -102,7 +104,12 @@ export class SystemModel implements HybridSystem {
 
   /** Flows, levels and surfaces at (y, t); cached for repeated calls at the same point and modes. */
   flowsAt(y: Float64Array, timeS: number): ModelContext {
-    if (timeS === this.cachedTimeS && this.cachedVersion === this.modeVersion && sameValues(y, this.cachedState)) return this.ctx;
+    if (
+      timeS === this.cachedTimeS &&
+      this.cachedVersion === this.modeVersion &&
+      sameValues(y, this.cachedState)
+    )
+      return this.ctx;
     return this.evaluate(y, timeS);
   }
 
@@ -139,7 +146,13 @@ export class SystemModel implements HybridSystem {
     ctx.flowM3PerS.fill(0);
     for (const index of this.parts.meterIndices) this.rates[index] = 0;
     for (const component of this.parts.components) component.computeFlows(ctx, this.rates);
-    applyVesselLimits(ctx, this.parts.ends, this.parts.vessels, this.scratchInflow, this.scratchNet);
+    applyVesselLimits(
+      ctx,
+      this.parts.ends,
+      this.parts.vessels,
+      this.scratchInflow,
+      this.scratchNet,
+    );
     this.cachedState.set(y);
     this.cachedTimeS = timeS;
     this.cachedVersion = this.modeVersion;

@@ -22,8 +22,12 @@ export function makeTimedSchedule(
   power: { on: boolean },
   leaks: readonly LeakComponent[],
 ): TimedSchedule {
-  const entries = scenario.schedule.map((entry, order) => ({ entry, order })).sort((a, b) => a.entry.at - b.entry.at || a.order - b.order);
-  const times = [...new Set([...entries.map((e) => e.entry.at), ...leaks.map((leak) => leak.leak.start)])].sort((a, b) => a - b);
+  const entries = scenario.schedule
+    .map((entry, order) => ({ entry, order }))
+    .sort((a, b) => a.entry.at - b.entry.at || a.order - b.order);
+  const times = [
+    ...new Set([...entries.map((e) => e.entry.at), ...leaks.map((leak) => leak.leak.start)]),
+  ].sort((a, b) => a - b);
   let nextEntry = 0;
   return {
     nextAfter: (afterS) => {
@@ -45,7 +49,13 @@ export function makeTimedSchedule(
         if (leak.open || leak.leak.start > timeS) continue;
         leak.open = true;
         const { from, diameter, elevation } = leak.leak;
-        log({ t_s: timeS, kind: 'leak-start', where: from, detail: `A ${fmt(diameter * 1000)} mm leak opened in ${from} at elevation ${fmt(elevation)} m (${leak.label}).`, values: { diameterM: diameter, elevationM: elevation } });
+        log({
+          t_s: timeS,
+          kind: 'leak-start',
+          where: from,
+          detail: `A ${fmt(diameter * 1000)} mm leak opened in ${from} at elevation ${fmt(elevation)} m (${leak.label}).`,
+          values: { diameterM: diameter, elevationM: elevation },
+        });
       }
     },
   };

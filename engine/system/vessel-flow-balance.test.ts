@@ -4,7 +4,14 @@ import { makeVesselComponent } from '../components/vessel';
 import type { ModelContext } from './model-context';
 import { applyVesselLimits } from './vessel-flow-balance';
 
-const box = (id: string): Vessel => ({ id, kind: 'tank', shape: { type: 'box', length: 1, width: 1 }, floorElevation: 0, height: 1, initialLevel: 0.5 });
+const box = (id: string): Vessel => ({
+  id,
+  kind: 'tank',
+  shape: { type: 'box', length: 1, width: 1 },
+  floorElevation: 0,
+  height: 1,
+  initialLevel: 0.5,
+});
 
 /** Three vessels a, b, c (state 0–2) and two rim sinks (3, 4); channels a→b, b→c, b→rim(4), c→a. */
 function setup() {
@@ -21,7 +28,12 @@ function setup() {
     inflowM3PerS: new Float64Array(3),
     netInflowM3PerS: new Float64Array(3),
   };
-  return { vessels: [a, b, c], ends, ctx, scratch: [new Float64Array(3), new Float64Array(3)] as const };
+  return {
+    vessels: [a, b, c],
+    ends,
+    ctx,
+    scratch: [new Float64Array(3), new Float64Array(3)] as const,
+  };
 }
 
 describe('applyVesselLimits', () => {

@@ -8,7 +8,13 @@ export interface ChannelEnds {
 }
 
 /** Sums each vessel's inflow and net inflow over all channels into the given arrays. */
-export function sumVesselFlows(ends: ChannelEnds, flows: Float64Array, vesselCount: number, inflow: Float64Array, net: Float64Array): void {
+export function sumVesselFlows(
+  ends: ChannelEnds,
+  flows: Float64Array,
+  vesselCount: number,
+  inflow: Float64Array,
+  net: Float64Array,
+): void {
   inflow.fill(0);
   net.fill(0);
   for (let k = 0; k < flows.length; k += 1) {
@@ -33,7 +39,13 @@ export function sumVesselFlows(ends: ChannelEnds, flows: Float64Array, vesselCou
  * the rim (lost). Scaling a flow changes it for both ends, so water stays conserved. Fills
  * ctx.inflowM3PerS and ctx.netInflowM3PerS with the values before these limits.
  */
-export function applyVesselLimits(ctx: ModelContext, ends: ChannelEnds, vessels: readonly VesselComponent[], scratchInflow: Float64Array, scratchNet: Float64Array): void {
+export function applyVesselLimits(
+  ctx: ModelContext,
+  ends: ChannelEnds,
+  vessels: readonly VesselComponent[],
+  scratchInflow: Float64Array,
+  scratchNet: Float64Array,
+): void {
   const flows = ctx.flowM3PerS;
   const n = vessels.length;
   sumVesselFlows(ends, flows, n, ctx.inflowM3PerS, ctx.netInflowM3PerS);
@@ -57,7 +69,12 @@ export function applyVesselLimits(ctx: ModelContext, ends: ChannelEnds, vessels:
 }
 
 /** Multiplies every flow leaving state component `index` by `factor`. */
-function scaleOutflows(ends: ChannelEnds, flows: Float64Array, index: number, factor: number): void {
+function scaleOutflows(
+  ends: ChannelEnds,
+  flows: Float64Array,
+  index: number,
+  factor: number,
+): void {
   for (let k = 0; k < flows.length; k += 1) {
     const q = flows[k] as number;
     if ((q > 0 && ends.from[k] === index) || (q < 0 && ends.to[k] === index)) flows[k] = q * factor;

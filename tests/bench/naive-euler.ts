@@ -1,4 +1,4 @@
-import type { SystemModel } from '../../engine/system/system-model';
+import type { SystemModel } from '../../engine/index';
 
 /**
  * A naive fixed-step explicit Euler integration of the same system model, for comparison only:
@@ -18,7 +18,7 @@ export function integrateNaiveEuler(model: SystemModel, durationS: number, stepS
   rearm(0);
   let nextTimed = model.nextTimedTransitionS(0);
   let steps = 0;
-  for (let t = 0; t < durationS; ) {
+  for (let t = 0; t < durationS;) {
     model.derivative(f, y, t);
     for (let i = 0; i < y.length; i += 1) y[i] = (y[i] as number) + stepS * (f[i] as number);
     t += stepS;

@@ -9,14 +9,20 @@ import { join } from 'node:path';
 import { setFlagsFromString } from 'node:v8';
 import { runInNewContext } from 'node:vm';
 import { parseScenario, type Scenario } from '../../shared/scenario';
-import { simulate, type SimulateOptions, type SimulationOutcome } from '../../engine/index';
-import { SystemModel } from '../../engine/system/system-model';
+import {
+  simulate,
+  SystemModel,
+  type SimulateOptions,
+  type SimulationOutcome,
+} from '../../engine/index';
 import { integrateNaiveEuler } from './naive-euler';
 
 const RUNS = 7;
 
 function load(name: string): Scenario {
-  const parsed = parseScenario(JSON.parse(readFileSync(join(import.meta.dirname, '../../scenarios', name), 'utf8')));
+  const parsed = parseScenario(
+    JSON.parse(readFileSync(join(import.meta.dirname, '../../scenarios', name), 'utf8')),
+  );
   if (!parsed.success) throw new Error(`${name} is invalid`);
   return parsed.scenario;
 }
@@ -26,7 +32,10 @@ const median = (values: number[]): number => {
   return sorted[Math.floor(sorted.length / 2)] as number;
 };
 
-function timed(scenario: Scenario, options: SimulateOptions): { wallMs: number; outcome: SimulationOutcome } {
+function timed(
+  scenario: Scenario,
+  options: SimulateOptions,
+): { wallMs: number; outcome: SimulationOutcome } {
   const start = performance.now();
   const outcome = simulate(scenario, options);
   return { wallMs: performance.now() - start, outcome };
@@ -47,7 +56,15 @@ function throughput(label: string, file: string, durationS: number): void {
   const { stats, summary } = last.result;
   const cycles = summary.beds.reduce((sum, bed) => sum + bed.cycles, 0);
   const wall = median(walls);
-  console.log(`${label.padEnd(28)} ${(durationS / 3600).toFixed(0).padStart(3)} h  median ${wall.toFixed(1).padStart(7)} ms (min ${Math.min(...walls).toFixed(1)})  ${Math.round(durationS / (wall / 1000)).toLocaleString('en').padStart(10)} sim s/wall s  ${cycles} cycles  ${(stats.steps / cycles).toFixed(1)} steps/cycle  ${(stats.rhsEvaluations / cycles).toFixed(0)} evaluations/cycle  (${stats.steps} steps, ${stats.rejected} rejected, ${stats.rhsEvaluations} evaluations, ${stats.events} events)`);
+  console.log(
+    `${label.padEnd(28)} ${(durationS / 3600).toFixed(0).padStart(3)} h  median ${wall.toFixed(1).padStart(7)} ms (min ${Math.min(...walls).toFixed(1)})  ${Math.round(
+      durationS / (wall / 1000),
+    )
+      .toLocaleString('en')
+      .padStart(
+        10,
+      )} sim s/wall s  ${cycles} cycles  ${(stats.steps / cycles).toFixed(1)} steps/cycle  ${(stats.rhsEvaluations / cycles).toFixed(0)} evaluations/cycle  (${stats.steps} steps, ${stats.rejected} rejected, ${stats.rhsEvaluations} evaluations, ${stats.events} events)`,
+  );
 }
 
 /** Mean period over the first seven cycles (the same cycles in every run being compared), s. */
@@ -60,8 +77,13 @@ const meanPeriodS = (events: readonly { kind: string; t_s: number }[]): number =
 function eulerComparison(): void {
   const scenario = load('tabletop-classroom.json');
   const durationS = 3600;
-  const reference = meanPeriodS(simulate({ ...scenario, run: { ...scenario.run, tolerance: 1e-12 } }, { durationS }).result.events);
-  console.log(`\nAdaptive Cash–Karp against naive fixed-step Euler (${scenario.name}, 1 h): error of the mean cycle period against a 1e-12 run (${reference.toFixed(6)} s)`);
+  const reference = meanPeriodS(
+    simulate({ ...scenario, run: { ...scenario.run, tolerance: 1e-12 } }, { durationS }).result
+      .events,
+  );
+  console.log(
+    `\nAdaptive Cash–Karp against naive fixed-step Euler (${scenario.name}, 1 h): error of the mean cycle period against a 1e-12 run (${reference.toFixed(6)} s)`,
+  );
   const euler: { stepS: number; error: number; wallMs: number; steps: number }[] = [];
   for (const stepS of [0.4, 0.2, 0.1, 0.05, 0.025, 0.0125, 0.00625]) {
     const model = new SystemModel(scenario);
@@ -70,21 +92,31 @@ function eulerComparison(): void {
     const wallMs = performance.now() - start;
     const error = Math.abs(meanPeriodS(model.events) / reference - 1);
     euler.push({ stepS, error, wallMs, steps });
-    console.log(`  Euler h = ${String(stepS).padEnd(6)} s: period error ${error.toExponential(2)}, ${steps} steps, ${wallMs.toFixed(0)} ms`);
+    console.log(
+      `  Euler h = ${String(stepS).padEnd(6)} s: period error ${error.toExponential(2)}, ${steps} steps, ${wallMs.toFixed(0)} ms`,
+    );
   }
   const finest = euler[euler.length - 1];
   if (!finest) return;
   const perStepMs = finest.wallMs / finest.steps;
   for (const tolerance of [1e-8, 1e-6, 1e-4]) {
-    const runs = Array.from({ length: RUNS }, () => timed({ ...scenario, run: { ...scenario.run, tolerance } }, { durationS, maxSamples: 2000 }));
+    const runs = Array.from({ length: RUNS }, () =>
+      timed({ ...scenario, run: { ...scenario.run, tolerance } }, { durationS, maxSamples: 2000 }),
+    );
     const wall = median(runs.map((r) => r.wallMs));
     const error = Math.abs(meanPeriodS(runs[0]?.outcome.result.events ?? []) / reference - 1);
     // The coarsest Euler run at least as accurate, if one was run; else Euler's first order
     // (error ∝ h) from the finest run tells how many steps it would need.
     const matching = euler.find((e) => e.error <= error);
-    const eulerMs = matching ? matching.wallMs : (durationS / (finest.stepS * (error / finest.error))) * perStepMs;
-    const how = matching ? `measured at h = ${matching.stepS} s` : `extrapolated at first order to h ≈ ${(finest.stepS * (error / finest.error)).toExponential(1)} s`;
-    console.log(`  adaptive, tolerance ${tolerance.toExponential(0)}: period error ${error.toExponential(2)} in ${wall.toFixed(1)} ms; Euler at equal accuracy ${(eulerMs / 1000).toPrecision(3)} s (${how}): ratio ${Math.round(eulerMs / wall).toLocaleString('en')}×`);
+    const eulerMs = matching
+      ? matching.wallMs
+      : (durationS / (finest.stepS * (error / finest.error))) * perStepMs;
+    const how = matching
+      ? `measured at h = ${matching.stepS} s`
+      : `extrapolated at first order to h ≈ ${(finest.stepS * (error / finest.error)).toExponential(1)} s`;
+    console.log(
+      `  adaptive, tolerance ${tolerance.toExponential(0)}: period error ${error.toExponential(2)} in ${wall.toFixed(1)} ms; Euler at equal accuracy ${(eulerMs / 1000).toPrecision(3)} s (${how}): ratio ${Math.round(eulerMs / wall).toLocaleString('en')}×`,
+    );
   }
 }
 
@@ -92,7 +124,9 @@ function memory(): void {
   setFlagsFromString('--expose_gc');
   const gc = runInNewContext('gc') as () => void;
   const scenario = load('greenhouse-three-beds.json');
-  console.log('\nMemory with the series downsampled to 1000 samples (greenhouse): heap retained by the result');
+  console.log(
+    '\nMemory with the series downsampled to 1000 samples (greenhouse): heap retained by the result',
+  );
   for (const hours of [6, 24, 72]) {
     gc();
     const before = process.memoryUsage().heapUsed;
@@ -100,11 +134,15 @@ function memory(): void {
     gc();
     const retained = process.memoryUsage().heapUsed - before;
     const json = JSON.stringify(outcome.result).length;
-    console.log(`  ${String(hours).padStart(3)} h: ${outcome.result.series.t_s.length} samples, ${outcome.result.events.length} events, result ${(json / 1024).toFixed(0)} KiB as JSON, heap +${(retained / 1024 / 1024).toFixed(2)} MiB`);
+    console.log(
+      `  ${String(hours).padStart(3)} h: ${outcome.result.series.t_s.length} samples, ${outcome.result.events.length} events, result ${(json / 1024).toFixed(0)} KiB as JSON, heap +${(retained / 1024 / 1024).toFixed(2)} MiB`,
+    );
   }
 }
 
-console.log(`Tidewright engine bench: medians of ${RUNS} runs after one warm-up; series downsampled to 2000 samples.`);
+console.log(
+  `Tidewright engine bench: medians of ${RUNS} runs after one warm-up; series downsampled to 2000 samples.`,
+);
 throughput('one bed (classroom tabletop)', 'tabletop-classroom.json', 24 * 3600);
 throughput('greenhouse, three beds', 'greenhouse-three-beds.json', 24 * 3600);
 throughput('drill (power cut, leak)', 'power-cut-and-leak-drill.json', 4 * 3600);

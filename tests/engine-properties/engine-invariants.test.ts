@@ -6,7 +6,8 @@ import { arbitraryScenarioFile } from './arbitrary-scenario-file';
 
 function parsed(file: unknown): Scenario {
   const result = parseScenario(file);
-  if (!result.success) throw new Error(result.issues.map((i) => `${i.path}: ${i.message}`).join('; '));
+  if (!result.success)
+    throw new Error(result.issues.map((i) => `${i.path}: ${i.message}`).join('; '));
   return result.scenario;
 }
 
@@ -61,7 +62,10 @@ describe('engine invariants over random valid systems', () => {
       fc.property(arbitraryScenarioFile(true), (file) => {
         const scenario = parsed({ ...file, run: { ...file.run, duration: 2400 } });
         const coarse = simulate(scenario);
-        const fine = simulate({ ...scenario, run: { ...scenario.run, tolerance: scenario.run.tolerance / 2 } });
+        const fine = simulate({
+          ...scenario,
+          run: { ...scenario.run, tolerance: scenario.run.tolerance / 2 },
+        });
         for (const bed of coarse.result.summary.beds) {
           const other = fine.result.summary.beds.find((b) => b.id === bed.id);
           if (other === undefined) throw new Error(`bed ${bed.id} missing`);
@@ -73,7 +77,9 @@ describe('engine invariants over random valid systems', () => {
           compared += 1;
           // The global error of an event time grows with the number of steps; 1e-5 relative is
           // a thousand times the per-step tolerance and far below any physical meaning.
-          expect(Math.abs(other.periodMean_s - bed.periodMean_s) / bed.periodMean_s).toBeLessThan(1e-5);
+          expect(Math.abs(other.periodMean_s - bed.periodMean_s) / bed.periodMean_s).toBeLessThan(
+            1e-5,
+          );
         }
       }),
       { numRuns: 12, seed: 4242 },

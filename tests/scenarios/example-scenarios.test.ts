@@ -5,11 +5,14 @@ import { parseScenario, type Scenario } from '../../shared/scenario';
 import { simulate, type RunEvent, type SimulationOutcome } from '../../engine/index';
 
 const folder = join(__dirname, '../../scenarios');
-const files = readdirSync(folder).filter((name) => name.endsWith('.json')).sort();
+const files = readdirSync(folder)
+  .filter((name) => name.endsWith('.json'))
+  .sort();
 
 function load(name: string): Scenario {
   const parsed = parseScenario(JSON.parse(readFileSync(join(folder, name), 'utf8')));
-  if (!parsed.success) throw new Error(`${name}: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`);
+  if (!parsed.success)
+    throw new Error(`${name}: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join('; ')}`);
   return parsed.scenario;
 }
 
@@ -34,7 +37,9 @@ const vessel = (outcome: SimulationOutcome, id: string) => {
   return found;
 };
 const eventsOf = (outcome: SimulationOutcome, kind: string, where?: string): RunEvent[] =>
-  outcome.result.events.filter((e) => e.kind === kind && (where === undefined || e.where === where));
+  outcome.result.events.filter(
+    (e) => e.kind === kind && (where === undefined || e.where === where),
+  );
 
 describe('every example scenario', () => {
   it('is described in scenarios/README.md', () => {
@@ -78,7 +83,9 @@ describe('greenhouse-three-beds.json', () => {
       expect(summary.state).toBe('cycling');
       expect(summary.periodMean_s).toBeGreaterThan(3 * 60);
       expect(summary.periodMean_s).toBeLessThan(20 * 60);
-      expect((summary.periodMax_s ?? 0) - (summary.periodMin_s ?? 0)).toBeLessThan(0.1 * (summary.periodMean_s ?? 0));
+      expect((summary.periodMax_s ?? 0) - (summary.periodMin_s ?? 0)).toBeLessThan(
+        0.1 * (summary.periodMean_s ?? 0),
+      );
     }
     expect(outcome.result.summary.pumps[0]?.dry_s).toBe(0);
     expect(eventsOf(outcome, 'rim-overflow')).toHaveLength(0);
@@ -119,7 +126,9 @@ describe('locking-siphon.json', () => {
     expect(eventsOf(outcome, 'siphon-break')).toHaveLength(0);
     const [lock] = eventsOf(outcome, 'siphon-lock', 'bed');
     const values = lock?.values ?? {};
-    expect(values['inflowM3PerS']).toBeGreaterThanOrEqual(values['siphonFlowAtBreakM3PerS'] ?? Infinity);
+    expect(values['inflowM3PerS']).toBeGreaterThanOrEqual(
+      values['siphonFlowAtBreakM3PerS'] ?? Infinity,
+    );
     expect(values['cureInflowDecreaseM3PerS']).toBeGreaterThan(0);
   });
 });
@@ -136,6 +145,8 @@ describe('power-cut-and-leak-drill.json', () => {
     const intakeM = scenario.pumps[0]?.intakeHeight ?? 0;
     expect(vessel(outcome, 'tank').minLevel_m).toBeGreaterThanOrEqual(intakeM - 1e-6);
     expect(vessel(outcome, 'tank').lost_m3).toBeGreaterThan(0);
-    expect(outcome.result.verdicts.find((v) => v.check.startsWith('tank: stays above'))?.status).toBe('fails');
+    expect(
+      outcome.result.verdicts.find((v) => v.check.startsWith('tank: stays above'))?.status,
+    ).toBe('fails');
   });
 });
