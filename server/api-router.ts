@@ -9,6 +9,7 @@ import { systemsRouter } from './systems/systems-router';
 import { runsRouter } from './runs/runs-router';
 import { classroomRouter } from './classroom/classroom-router';
 import { measurementsRouter } from './measurements/measurements-router';
+import { sweepsRouter } from './sweeps/sweeps-router';
 
 /** Mounts every resource's router. Features add their line here. */
 export function apiRouter(ctx: AppContext): Router {
@@ -20,6 +21,7 @@ export function apiRouter(ctx: AppContext): Router {
   router.use(runsRouter(ctx));
   router.use(classroomRouter(ctx));
   router.use(measurementsRouter(ctx));
+  router.use(sweepsRouter(ctx));
   router.use(notFoundHandler);
   return router;
 }

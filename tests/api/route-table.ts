@@ -16,6 +16,7 @@ import { runsRoutes } from './routes/runs-routes';
 import { systemsRoutes } from './routes/systems-routes';
 import { classroomRoutes } from './routes/classroom-routes';
 import { measurementsRoutes } from './routes/measurements-routes';
+import { sweepsRoutes } from './routes/sweeps-routes';
 
 /** An HTTP method as supertest names it. */
 export type HttpMethod = 'get' | 'post' | 'put' | 'patch' | 'delete';
@@ -71,7 +72,7 @@ export interface RouteGroup {
 }
 
 /** Every group; the authz test requires that together they list every route of the app. */
-export const routeGroups: readonly RouteGroup[] = [healthRoutes, authRoutes, adminRoutes, systemsRoutes, runsRoutes, classroomRoutes, measurementsRoutes];
+export const routeGroups: readonly RouteGroup[] = [healthRoutes, authRoutes, adminRoutes, systemsRoutes, runsRoutes, classroomRoutes, measurementsRoutes, sweepsRoutes];
 
 /** All route cases of all groups. */
 export const allRoutes: readonly RouteCase[] = routeGroups.flatMap((group) => group.routes);
