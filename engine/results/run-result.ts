@@ -3,9 +3,9 @@ export interface RunEvent {
   /** Time, s. */
   t_s: number;
   /**
-   * One of spill-start, primed, siphon-break, spill-stall, siphon-lock, rim-overflow,
+   * One of spill-start, spill-end, primed, siphon-break, spill-stall, siphon-lock, rim-overflow,
    * overflow-start, overflow-end, below-min-level, pump-dry, pump-restart, pump-off, pump-on,
-   * leak-start, back-siphon-start, back-siphon-end.
+   * leak-start, back-siphon-start, back-siphon-end, float-switch.
    */
   kind: string;
   /** Vessel, bed or pump id. */
