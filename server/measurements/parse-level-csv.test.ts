@@ -185,3 +185,13 @@ describe('parseLevelCsv', () => {
     expect(zone).toMatchObject({ ok: false, code: 'INVALID_TIME_ZONE' });
   });
 });
+
+describe('parseLevelCsv on a long log', () => {
+  it('reads the largest allowed file without running out of stack', () => {
+    const lines = ['time,level_mm'];
+    for (let i = 0; i < 200_000; i++) lines.push(`${i},${100 + (i % 200)}`);
+    const parsed = parseText(lines.join('\n'), levelOptions);
+    expect(parsed.ok && parsed.acceptedCount).toBe(200_000);
+    expect(parsed.ok && parsed.series.beds[0]?.t_s.at(-1)).toBe(199_999);
+  });
+});

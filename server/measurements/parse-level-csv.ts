@@ -270,7 +270,7 @@ function assemble(
   previewRows: number,
 ): ParsedLevelCsv {
   const absolute = format !== 'elapsed-s';
-  const t0 = Math.min(...accepted.map((a) => a.time));
+  const t0 = accepted.reduce((min, a) => Math.min(min, a.time), Number.POSITIVE_INFINITY);
   const beds = new Map<string, { bed: string; t_s: number[]; level_m: number[] }>();
   for (const a of accepted) {
     let series = beds.get(a.bed);

@@ -65,3 +65,16 @@ describe('readCsvTable', () => {
     });
   });
 });
+
+describe('readCsvTable line numbers', () => {
+  it('keeps file line numbers when a quoted field spans lines', () => {
+    const table = readCsvTable('time,note,level\n0,"two\nlines",0.1\n5,ok,0.2\n', {
+      ...defaults,
+      headerLine: 1,
+    });
+    expect(table.ok && table.records.map((r) => [r.line, r.fields[2]])).toEqual([
+      [3, '0.1'],
+      [4, '0.2'],
+    ]);
+  });
+});

@@ -110,7 +110,7 @@ function lineStart(text: string, line: number): number {
 }
 
 /** csv-parse with `info: true` yields `{record, info: {lines}}` items; its typings do not say so. */
-function toRecords(output: unknown, lineOffset: number): CsvRecord[] {
+function withInfo(output: unknown, lineOffset: number): CsvRecord[] {
   if (!Array.isArray(output)) return [];
   return output.map((item: unknown) => {
     const entry = item as { record?: unknown; info?: { lines?: unknown } };
@@ -120,6 +120,43 @@ function toRecords(output: unknown, lineOffset: number): CsvRecord[] {
       fields,
     };
   });
+}
+
+/** Line numbers (from 1, plus `lineOffset`) of the lines csv-parse turns into records: not blank, not `#` comments. */
+function contentLineNumbers(body: string, lineOffset: number): number[] {
+  const numbers: number[] = [];
+  body.split(/\r\n|\n|\r/).forEach((line, i) => {
+    if (line !== '' && !line.startsWith('#')) numbers.push(i + 1 + lineOffset);
+  });
+  return numbers;
+}
+
+const PARSE_OPTIONS = {
+  bom: true,
+  trim: true,
+  skip_empty_lines: true,
+  comment: '#',
+  comment_no_infix: true,
+  relax_column_count: true,
+  relax_quotes: true,
+  to: MEASUREMENT_MAX_ROWS + 2,
+} as const;
+
+/**
+ * Parses the table with each record's file line. csv-parse's per-record `info` triples the time
+ * of a large file, so records are first paired with the content lines counted here; only when
+ * the counts differ (a quoted field spanning lines) is the file parsed again with `info`.
+ */
+function parseRecords(body: string, delimiter: string, lineOffset: number): CsvRecord[] {
+  const plain = parse(body, { ...PARSE_OPTIONS, delimiter });
+  const lines = contentLineNumbers(body, lineOffset);
+  if (
+    plain.length === lines.length ||
+    (plain.length === MEASUREMENT_MAX_ROWS + 2 && lines.length > plain.length)
+  ) {
+    return plain.map((fields, i) => ({ line: lines[i] ?? 0, fields }));
+  }
+  return withInfo(parse(body, { ...PARSE_OPTIONS, delimiter, info: true }), lineOffset);
 }
 
 /** Reads the records after the header; csv-parse errors become `CSV_MALFORMED` naming the line. */
@@ -132,20 +169,9 @@ export function readCsvTable(text: string, options: CsvTableOptions): CsvTable {
   const headerLine = options.headerLine ?? detectHeaderLine(sample, delimiter);
   // Cut the preamble off ourselves: csv-parse's from_line does not count comment lines.
   const start = lineStart(text, headerLine);
-  let output: unknown;
+  let records: CsvRecord[];
   try {
-    output = parse(text.slice(start), {
-      delimiter,
-      bom: true,
-      info: true,
-      trim: true,
-      skip_empty_lines: true,
-      comment: '#',
-      comment_no_infix: true,
-      relax_column_count: true,
-      relax_quotes: true,
-      to: MEASUREMENT_MAX_ROWS + 2,
-    });
+    records = parseRecords(text.slice(start), delimiter, headerLine - 1);
   } catch (error) {
     if (error instanceof CsvError) {
       return {
@@ -156,7 +182,6 @@ export function readCsvTable(text: string, options: CsvTableOptions): CsvTable {
     }
     throw error;
   }
-  const records = toRecords(output, headerLine - 1);
   if (records.length > MEASUREMENT_MAX_ROWS + 1) {
     return {
       ok: false,
@@ -165,7 +190,7 @@ export function readCsvTable(text: string, options: CsvTableOptions): CsvTable {
     };
   }
   if (!options.hasHeader) {
-    const width = Math.max(0, ...records.map((r) => r.fields.length));
+    const width = records.reduce((w, r) => Math.max(w, r.fields.length), 0);
     return {
       ok: true,
       columns: Array.from({ length: width }, (_, i) => String(i + 1)),

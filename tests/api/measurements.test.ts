@@ -239,6 +239,25 @@ describe('measurements API', () => {
     expect(series.beds[0]?.t_s).toEqual([0, 5, 15]);
   });
 
+  it('reads a large file in a worker thread with the same outcome, and refuses large binary data there too', async () => {
+    const lines = ['time,distance_mm'];
+    for (let i = 0; i < 20_000; i++)
+      lines.push(
+        `2024-05-31 ${String(10 + Math.floor(i / 3600)).padStart(2, '0')}:${String(Math.floor(i / 60) % 60).padStart(2, '0')}:${String(i % 60).padStart(2, '0')},${300 + (i % 50)}`,
+      );
+    const big = lines.join('\n');
+    expect(Buffer.byteLength(big)).toBeGreaterThan(256 * 1024);
+    const res = await upload(big, 'day.csv');
+    expect(res.status, JSON.stringify(res.body)).toBe(201);
+    const measurement = MeasurementSchema.parse(res.body);
+    expect(measurement.beds).toEqual([
+      { bed: 'bed-a', samples: 20_000, durationS: 19_999, minLevel_m: 0.051, maxLevel_m: 0.1 },
+    ]);
+    const refused = await upload(Buffer.alloc(300 * 1024, 0), 'zeros.csv');
+    expect(refused.status).toBe(415);
+    expect(ApiErrorSchema.parse(refused.body).error.code).toBe('NOT_A_CSV');
+  });
+
   it('stores a stopwatch log in SI units and names an unknown bed by its entry', async () => {
     const res = await owner.post(`/api/systems/${system.id}/measurements/stopwatch`).send({
       name: 'Saturday timings',

@@ -3,8 +3,8 @@
  * core busy), with a short queue. A worker that overruns the fit's deadline by the grace period
  * is terminated.
  */
-import { Worker } from 'node:worker_threads';
 import { HttpError } from '../../http/http-error';
+import { spawnTsWorker } from '../spawn-ts-worker';
 import type { CalibrationProblem, FitLimits } from './calibration-problem';
 import type { CalibrationWorkerMessage } from './calibration-worker-messages';
 import type { FitOutcome } from './fit-calibration';
@@ -12,23 +12,13 @@ import type { FitOutcome } from './fit-calibration';
 /** How long past its deadline a fit may run before its worker is terminated, ms. */
 const GRACE_MS = 15_000;
 
-/**
- * Starts a worker on a TypeScript entry through tsx's API (Node 20 does not apply `--import`
- * hooks to a worker's own entry file); works under `node --import tsx`, tsx and vitest alike.
- */
-function spawnWorker(entry: URL): Worker {
-  const api = import.meta.resolve('tsx/esm/api');
-  const code = `import(${JSON.stringify(api)}).then((m) => m.tsImport(${JSON.stringify(entry.href)}, ${JSON.stringify(entry.href)}));`;
-  return new Worker(code, { eval: true, execArgv: [] });
-}
-
 function runInWorker(
   entry: URL,
   problem: CalibrationProblem,
   limits: FitLimits,
 ): Promise<FitOutcome> {
   return new Promise((resolve, reject) => {
-    const worker = spawnWorker(entry);
+    const worker = spawnTsWorker(entry);
     const timer = setTimeout(() => {
       void worker.terminate();
       reject(
