@@ -64,18 +64,17 @@ describe('simulate', () => {
     for (const c of series.channels) expect(c.values.length).toBe(series.t_s.length);
   });
 
-  it('keeps the series within maxSamples whatever the run length', () => {
-    const short = simulate(load('greenhouse-three-beds.json'), {
-      durationS: 6 * 3600,
-      maxSamples: 500,
-    }).result.series;
-    const long = simulate(load('greenhouse-three-beds.json'), {
-      durationS: 24 * 3600,
-      maxSamples: 500,
-    }).result.series;
-    expect(short.t_s.length).toBeLessThanOrEqual(500);
-    expect(long.t_s.length).toBeLessThanOrEqual(500);
-    expect(long.t_s.length).toBe(short.t_s.length);
+  it('keeps the series and the events within maxSamples whatever the run length, with the same cycle statistics', () => {
+    const scenario = load('greenhouse-three-beds.json');
+    const short = simulate(scenario, { durationS: 6 * 3600, maxSamples: 500 }).result;
+    const long = simulate(scenario, { durationS: 24 * 3600, maxSamples: 500 }).result;
+    const full = simulate(scenario, { durationS: 24 * 3600 }).result;
+    expect(short.series.t_s.length).toBeLessThanOrEqual(500);
+    expect(long.series.t_s.length).toBe(short.series.t_s.length);
+    expect(long.events.length).toBeLessThanOrEqual(500 + 20);
+    expect(full.events.length).toBeGreaterThan(1500);
+    expect(long.stats.eventsOmitted).toBe(full.events.length - long.events.length);
+    expect(long.summary.beds).toEqual(full.summary.beds);
   });
 
   it('agrees with exact hydraulics at every evaluation to within 1e-6 in the cycle period', () => {

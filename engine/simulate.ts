@@ -36,12 +36,10 @@ export function simulate(scenario: Scenario, options: SimulateOptions = {}): Sim
   const initialState = model.initialState();
   const recorder = makeRecorder(model, durationS, options);
   const extremes = new LevelExtremesTracker(model.parts.vessels);
-  const bedIndex = new Map(
-    model.parts.vessels.filter((v) => v.vessel.kind === 'bed').map((v) => [v.vessel.id, v.index]),
-  );
-  const cycles = new BedCycleRecorder(model.events, bedIndex, extremes.extremes);
+  const cycles = new BedCycleRecorder(bedsOf(scenario), extremes.extremes);
+  const omitted = limitEvents(model, cycles, options.maxSamples);
   const stalls = new StallMonitor(model);
-  const observer = composeObservers([extremes, cycles, recorder], stalls);
+  const observer = composeObservers([extremes, recorder], stalls);
   const outcome = integrateHybrid(
     model,
     initialState,
@@ -55,17 +53,62 @@ export function simulate(scenario: Scenario, options: SimulateOptions = {}): Sim
     startS: 0,
     endS: outcome.endS,
     extremes: extremes.extremes,
-    cycleMarks: cycles.marks,
+    tallies: cycles.tallies,
   });
   const events = [...model.events].sort((a, b) => a.t_s - b.t_s);
   const result = {
     ...summary,
     events,
-    stats: { ...outcome.stats, wall_ms: 0, simulated_s: outcome.endS },
+    stats: {
+      ...outcome.stats,
+      wall_ms: 0,
+      simulated_s: outcome.endS,
+      eventsOmitted: omitted.count,
+    },
     series: { t_s: recorder.timesS, channels: recorder.channels() },
   };
   if (outcome.status === 'failed') return { status: 'failed', reason: outcome.reason, result };
   return { status: outcome.status, result };
+}
+
+/** The beds of a scenario as the cycle recorder needs them. */
+function bedsOf(scenario: Scenario) {
+  return scenario.vessels.flatMap((vessel, index) =>
+    vessel.kind === 'bed'
+      ? [
+          {
+            id: vessel.id,
+            index,
+            drain: vessel.drain.type,
+            standpipeHeightM: vessel.drain.standpipe.height,
+          },
+        ]
+      : [],
+  );
+}
+
+/**
+ * Routes every reported event to the cycle recorder and, when the series is capped at
+ * `maxSamples`, keeps at most that many events, always including the first of each kind at each
+ * place, so memory stays flat with run length. Returns the running count of events left out.
+ */
+function limitEvents(
+  model: SystemModel,
+  cycles: BedCycleRecorder,
+  maxSamples: number | undefined,
+): { count: number } {
+  const omitted = { count: 0 };
+  const seen = new Set<string>();
+  model.onEvent = (event) => cycles.onEvent(event);
+  if (maxSamples === undefined) return omitted;
+  model.keepEvent = (event) => {
+    const key = `${event.kind}@${event.where}`;
+    const keep = !seen.has(key) || model.events.length < maxSamples;
+    seen.add(key);
+    if (!keep) omitted.count += 1;
+    return keep;
+  };
+  return omitted;
 }
 
 function buildModel(scenario: Scenario, exactHydraulics: boolean): SystemModel {

@@ -91,6 +91,8 @@ export interface RunStats {
   wall_ms: number;
   /** Simulated time reached, s. */
   simulated_s: number;
+  /** Events left out of `events` to keep a capped run's memory flat (0 without maxSamples). */
+  eventsOmitted: number;
 }
 
 /** Everything a run returns. */
@@ -110,7 +112,11 @@ export interface SimulateOptions {
   durationS?: number;
   /** Overrides the scenario's output interval, s. */
   outputIntervalS?: number;
-  /** Caps the series length: the grid is widened and event samples are left out to fit. */
+  /**
+   * Caps the series length (the grid is widened and event samples are left out to fit) and the
+   * event list (at most this many, always including the first of each kind at each place), so
+   * memory stays flat with run length. Cycle statistics still count every cycle.
+   */
   maxSamples?: number;
   /** Receives the fraction of simulated time done (0–1), at most once per percent. */
   onProgress?: (fraction: number) => void;

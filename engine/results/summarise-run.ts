@@ -1,5 +1,5 @@
 import type { SystemModel } from '../system/system-model';
-import type { BedCycleMarks } from './bed-cycle-recorder';
+import { closeOpenStandpipeDrain, type BedCycleTally } from './bed-cycle-recorder';
 import { summariseBellBed, summariseStandpipeBed } from './bed-summary';
 import type { LevelExtremes } from './level-extremes';
 import { massBalanceError } from './mass-balance';
@@ -14,7 +14,7 @@ export interface RunRecord {
   startS: number;
   endS: number;
   extremes: readonly LevelExtremes[];
-  cycleMarks: ReadonlyMap<string, BedCycleMarks>;
+  tallies: ReadonlyMap<string, BedCycleTally>;
 }
 
 /** Builds the summary, verdicts and mass-balance error of a run (series and stats are added by the caller). */
@@ -65,38 +65,21 @@ export function summariseRun(
 }
 
 function summariseBeds(record: RunRecord, durationS: number): BedSummary[] {
-  const { model, endS, cycleMarks } = record;
+  const { model, endS, tallies, extremes } = record;
   const { bells, standpipes, vessels } = model.parts;
-  const emptyMarks: BedCycleMarks = { spillStartsS: [], highsM: [], lowsM: [] };
   const byId = new Map<string, BedSummary>();
   for (const bell of bells) {
     const bed = vessels[bell.wiring.bed.index];
-    if (bed)
-      byId.set(
-        bell.bedId,
-        summariseBellBed(
-          bell,
-          bed,
-          model.events,
-          cycleMarks.get(bell.bedId) ?? emptyMarks,
-          endS,
-          durationS,
-        ),
-      );
+    const tally = tallies.get(bell.bedId);
+    if (bed && tally) byId.set(bell.bedId, summariseBellBed(bell, bed, tally, endS, durationS));
   }
   for (const standpipe of standpipes) {
-    const openLowM = record.extremes[standpipe.wiring.bed.index]?.windowMinM ?? Infinity;
-    byId.set(
-      standpipe.bedId,
-      summariseStandpipeBed(
-        standpipe,
-        model.events,
-        cycleMarks.get(standpipe.bedId) ?? emptyMarks,
-        openLowM,
-        endS,
-        durationS,
-      ),
-    );
+    const tally = tallies.get(standpipe.bedId);
+    const window = extremes[standpipe.wiring.bed.index];
+    if (!tally || !window) continue;
+    const crestM = standpipe.drain.standpipe.height;
+    closeOpenStandpipeDrain(tally, window, crestM, standpipe.phase === 'spilling');
+    byId.set(standpipe.bedId, summariseStandpipeBed(standpipe, tally, endS, durationS));
   }
   return model.parts.scenario.vessels.flatMap((v) => byId.get(v.id) ?? []);
 }

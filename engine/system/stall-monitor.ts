@@ -83,7 +83,7 @@ export class StallMonitor {
       .filter(Boolean)
       .join(' and ');
     bell.stall = spilling ? 'spill-stall' : 'siphon-lock';
-    this.model.events.push(
+    this.model.report(
       spilling
         ? spillStallEvent(bell, t, inflow, level, detectedBy)
         : siphonLockEvent(bell, t, inflow, threshold, level, detectedBy),

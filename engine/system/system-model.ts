@@ -17,8 +17,12 @@ export class SystemModel implements HybridSystem {
   readonly parts: SystemParts;
   readonly stateSize: number;
   readonly eventCount: number;
-  /** Events reported so far, in time order. */
+  /** Events kept so far, in time order (see {@link SystemModel.keepEvent}). */
   readonly events: RunEvent[] = [];
+  /** Called with every reported event, kept or not. */
+  onEvent: (event: RunEvent) => void = () => {};
+  /** Decides which reported events are kept in {@link SystemModel.events} (all by default). */
+  keepEvent: (event: RunEvent) => boolean = () => true;
   /** Incremented whenever a mode changes (keys the flow cache). */
   modeVersion = 0;
   private readonly ctx: ModelContext;
@@ -29,9 +33,13 @@ export class SystemModel implements HybridSystem {
   private readonly cachedState: Float64Array;
   private cachedTimeS = Number.NaN;
   private cachedVersion = -1;
-  private readonly log = (event: RunEvent): void => {
-    this.events.push(event);
-  };
+  private readonly log = (event: RunEvent): void => this.report(event);
+
+  /** Reports an event: passes it to {@link SystemModel.onEvent} and keeps it if wanted. */
+  report(event: RunEvent): void {
+    this.onEvent(event);
+    if (this.keepEvent(event)) this.events.push(event);
+  }
 
   /** Models `scenario`; `exactHydraulics` bypasses the hydraulic tables (slow; for verification). */
   constructor(scenario: Scenario, exactHydraulics = false) {
