@@ -73,7 +73,12 @@ export function authRouter(ctx: AppContext): Router {
 
   router.post('/auth/password-reset/confirm', resetPerIp, async (req, res) => {
     const input = parseOr400(PasswordResetConfirmSchema, req.body);
-    await confirmPasswordReset(ctx, input.token, input.password);
+    const userId = await confirmPasswordReset(ctx, input.token, input.password);
+    // Its rows are gone already; ending it here stops this response from saving it again.
+    if (req.session?.userId === userId) {
+      await endUserSession(req);
+      res.clearCookie(SESSION_COOKIE, { path: '/' });
+    }
     res.status(204).end();
   });
 

@@ -46,9 +46,9 @@ export async function requestPasswordReset(ctx: AppContext, email: string): Prom
 /**
  * Uses a token once: marks it used and stores the new password's hash in one step, so two
  * concurrent confirmations cannot both succeed. 400 `RESET_TOKEN_INVALID` for an unknown, used
- * or expired token.
+ * or expired token. Returns the id of the user whose password changed.
  */
-export async function confirmPasswordReset(ctx: AppContext, token: string, password: string): Promise<void> {
+export async function confirmPasswordReset(ctx: AppContext, token: string, password: string): Promise<string> {
   const passwordHash = await bcrypt.hash(password, ctx.auth.bcryptCost);
   const now = new Date(ctx.auth.now());
   const [used] = await ctx.db
@@ -67,4 +67,5 @@ export async function confirmPasswordReset(ctx: AppContext, token: string, passw
   }
   await setPasswordHash(ctx.db, used.userId, passwordHash);
   await destroyUserSessions(ctx.db, used.userId);
+  return used.userId;
 }

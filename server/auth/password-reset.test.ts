@@ -57,6 +57,18 @@ describe('password reset by e-mail', () => {
     expect(ApiErrorSchema.parse(reused.body).error.code).toBe('RESET_TOKEN_INVALID');
   });
 
+  it('signs out the browser that confirms the reset when it was signed in as that user', async () => {
+    const { user, password } = await createTestUser(t.ctx);
+    const client = await TestClient.create(createApp(t.ctx));
+    await client.signIn(user.email, password);
+    await client.post('/api/auth/password-reset').send({ email: user.email });
+    const token = tokenFromMail((await waitForMail(t.ctx.db, user.email)).textBody);
+    nowMs += 2 * 60_000; // long enough for the request to refresh the session's last-seen time
+    expect((await client.post('/api/auth/password-reset/confirm').send({ token, password: 'fresh long phrase here' })).status).toBe(204);
+    expect(await t.ctx.db.select().from(sessions)).toHaveLength(0);
+    expect((await client.get('/api/auth/me')).status).toBe(401);
+  });
+
   it('refuses a token after its expiry', async () => {
     const { user } = await createTestUser(t.ctx);
     const client = await TestClient.create(createApp(t.ctx));

@@ -59,10 +59,11 @@ function createServer(db: Database): SMTPServer {
 
 function listen(server: SMTPServer, port: number): Promise<number> {
   return new Promise((resolve, reject) => {
+    // smtp-server re-emits the listening socket's errors on itself.
     const onError = (error: Error): void => reject(error);
-    server.server.once('error', onError);
+    server.once('error', onError);
     server.listen(port, '127.0.0.1', () => {
-      server.server.off('error', onError);
+      server.off('error', onError);
       resolve((server.server.address() as AddressInfo).port);
     });
   });

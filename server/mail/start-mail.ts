@@ -12,16 +12,17 @@ export interface MailSetup {
 }
 
 /**
- * With SMTP_URL set, mail goes to that server. Otherwise, outside production, a local SMTP server
- * on 127.0.0.1:SMTP_PORT stores mail for the admin Outbox. In production without SMTP_URL, mail
- * cannot be sent: each attempt fails and is logged, and password reset tells nobody.
+ * With SMTP_URL set, mail goes to that server. Otherwise, in development, test and demo runs
+ * (outside production, or with TIDEWRIGHT_DEMO=1), a local SMTP server on 127.0.0.1:SMTP_PORT
+ * stores mail for the admin Outbox. In production without SMTP_URL, mail cannot be sent: each
+ * attempt fails and is logged, and password reset tells nobody.
  */
 export async function startMail(config: Config, db: Database, from: string, logger: Logger): Promise<MailSetup> {
   if (config.smtpUrl) {
     const mailer = createSmtpMailer(config.smtpUrl, from);
     return { mailer, close: async () => mailer.close() };
   }
-  if (config.env === 'production') {
+  if (!config.seedDemo) {
     logger.warn('SMTP_URL is not set: password reset e-mails cannot be sent.');
     const mailer: Mailer = {
       send: () => Promise.reject(new Error('No mail server: set SMTP_URL to an SMTP server URL.')),

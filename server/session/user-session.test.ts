@@ -39,7 +39,18 @@ describe('sessions', () => {
     }
     nowMs += 31 * MINUTE_MS;
     expect((await client.get('/api/auth/me')).status).toBe(401);
-    expect(await t.ctx.db.select().from(sessions)).toHaveLength(0);
+    const rows = await t.ctx.db.select().from(sessions);
+    expect(rows.filter((row) => (row.sess as { userId?: string }).userId === user.id)).toEqual([]);
+  });
+
+  it('let a timed-out session sign in again in the same browser', async () => {
+    const { user, password } = await createTestUser(t.ctx);
+    const client = await TestClient.create(createApp(t.ctx));
+    await client.signIn(user.email, password);
+    nowMs += 31 * MINUTE_MS;
+    const again = await client.post('/api/auth/login').send({ email: user.email, password });
+    expect(again.status).toBe(200);
+    expect((await client.get('/api/auth/me')).status).toBe(200);
   });
 
   it('end after the absolute timeout however active they are', async () => {

@@ -50,14 +50,14 @@ function expiredReason(req: Request, nowMs: number, ctx: AppContext): string | n
 
 /** Sets `req.user` from the session; a timed-out session or a disabled or deleted user is signed out. */
 export function loadSessionUser(ctx: AppContext): RequestHandler {
-  return async (req, res, next) => {
+  return async (req, _res, next) => {
     const userId = req.session?.userId;
     if (!userId) return next();
     const nowMs = ctx.auth.now();
     const row = expiredReason(req, nowMs, ctx) === null ? await findUserById(ctx.db, userId) : undefined;
     if (!row || row.disabled) {
-      await endUserSession(req);
-      res.clearCookie(SESSION_COOKIE, { path: '/' });
+      // A fresh empty session (not destroy): this request may go on to sign in or register.
+      await promised((done) => req.session.regenerate(done));
       return next();
     }
     req.user = toUser(row);
