@@ -16,6 +16,7 @@ import { detectLevelCycles } from './detect-level-cycles';
 import { loadMeasuredSeries, requireMeasurement } from './measurements-service';
 import { simulatedDrainCycles, type CycleEvent } from './simulated-drain-cycles';
 import { stopwatchSpreads } from './stopwatch-spreads';
+import { systemVessels } from './system-vessels';
 
 /** Evenly strided indices, first and last kept. */
 function stride(n: number, maxPoints: number): number[] {
@@ -63,7 +64,7 @@ export async function compareMeasurement(
   measurementId: string,
   query: { run: string; bed?: string | undefined; maxPoints: number },
 ): Promise<MeasurementComparison> {
-  const { head } = await requireMeasurement(db, user, measurementId, 'read');
+  const { head, system } = await requireMeasurement(db, user, measurementId, 'read');
   const run = await requireRun(db, user, query.run, 'read');
   if (run.systemId !== head.systemId)
     throw badRequest('Compare with a run of the same system.', [
@@ -88,7 +89,10 @@ export async function compareMeasurement(
     simulatedDrainCycles(events, bed, interpolator(series.t_s, channel.values)),
   );
   const bedSeries = measured?.beds.find((b) => b.bed === bed);
-  const measuredCycles = bedSeries ? detectLevelCycles(bedSeries.t_s, bedSeries.level_m) : [];
+  // Only beds flood and drain; a tank's or sump's level is overlaid without cycle figures.
+  const isBed = systemVessels(system.scenario).beds.includes(bed);
+  const measuredCycles =
+    bedSeries && isBed ? detectLevelCycles(bedSeries.t_s, bedSeries.level_m) : [];
   const measuredFigures: CycleFigures = bedSeries
     ? cycleFigures(measuredCycles)
     : figuresFromSpreads(stopwatchSpreads(entries, bed));

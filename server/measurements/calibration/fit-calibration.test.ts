@@ -50,7 +50,7 @@ const fakeSimulate: SimulateFn = (scenario, options) => {
     fractionFlooded: 0,
     state,
   } as const;
-  return {
+  const outcome: SimulationOutcome = {
     status: 'completed',
     result: {
       summary: { beds: [summaryBed], vessels: [], pumps: [] },
@@ -64,10 +64,12 @@ const fakeSimulate: SimulateFn = (scenario, options) => {
         events: events.length,
         wall_ms: 0,
         simulated_s: 0,
+        eventsOmitted: 0,
       },
       series: { t_s: [], channels: [] },
     },
-  } as SimulationOutcome;
+  };
+  return outcome;
 };
 
 const scenario = {
