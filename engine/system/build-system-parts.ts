@@ -238,19 +238,11 @@ function buildOverflows(
     if (overflow === undefined) return [];
     const source = vesselById(vessel.id);
     const sink = layout.sinks.find((s) => s.vesselId === vessel.id && s.kind === 'overflow');
-    const to = overflow.to === 'out' ? (sink?.index ?? -1) : vesselById(overflow.to).index;
-    return [
-      makeVesselOverflow(
-        source,
-        overflow,
-        addChannel(
-          `flow:${vessel.id}.overflow`,
-          `${vessel.id} overflow to ${overflow.to}`,
-          source.index,
-          to,
-        ),
-      ),
-    ];
+    const destination = overflow.to === 'out' ? undefined : vesselById(overflow.to);
+    const to = destination ? destination.index : (sink?.index ?? -1);
+    const where = `${vessel.id} overflow to ${overflow.to}`;
+    const channel = addChannel(`flow:${vessel.id}.overflow`, where, source.index, to);
+    return [makeVesselOverflow(source, overflow, channel, destination)];
   });
 }
 
