@@ -76,12 +76,16 @@ test('a new account resets its password through the Outbox link and signs in wit
   if (!admin) throw new Error('The demo seed has no admin.');
   await signIn(page, admin.email, DEMO_PASSWORD);
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: /Admin/ }).click();
+  await expect(page.getByRole('row', { name: new RegExp(email) })).toBeVisible();
+  await page.screenshot({ path: join(artifacts, 'admin-users.png'), fullPage: true });
   await page.getByRole('tab', { name: /Outbox/ }).click();
+  await expect(page.getByRole('tab', { name: /Outbox/ })).toHaveAttribute('aria-selected', 'true');
   const message = page.locator('mat-expansion-panel').filter({ hasText: email }).first();
   await expect(message).toContainText('Reset your Tidewright password');
   const link = message.getByRole('link', { name: /\/reset-password\?token=/ });
   await expect(link).toBeVisible();
-  await page.screenshot({ path: join(artifacts, 'outbox.png'), fullPage: true });
+  await page.mouse.move(0, 0);
+  await page.screenshot({ path: join(artifacts, 'outbox.png'), fullPage: true, animations: 'disabled' });
 
   // The admin reading the outbox follows the link; resetting another account keeps the admin signed in.
   await link.click();
