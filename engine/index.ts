@@ -32,16 +32,22 @@ export {
 } from './hydraulics/index';
 export {
   bedRegime,
+  bedStructuralLoad,
   cyclingInflowWindow,
   cyclingInflowWindows,
   pumpDutyPoint,
   pumpDutyPoints,
   pumpedInflowsM3PerS,
+  pumpReserves,
   regimeAtInflow,
+  MEDIA_DENSITIES,
   type BedRegime,
+  type BedStructuralLoad,
   type InflowRegime,
   type InflowWindow,
   type InflowWindowOptions,
+  type MediaDensity,
   type PumpDutyPoint,
+  type PumpReserve,
   type RegimeEvidence,
 } from './analysis/index';

@@ -17,3 +17,10 @@ export {
   pumpedInflowsM3PerS,
   type PumpDutyPoint,
 } from './pump-duty-points';
+export {
+  bedStructuralLoad,
+  MEDIA_DENSITIES,
+  type BedStructuralLoad,
+  type MediaDensity,
+} from './bed-structural-load';
+export { pumpReserves, type PumpReserve } from './pump-reserves';
