@@ -51,7 +51,9 @@ export async function saveAnswer(
 
 /**
  * Runs the lesson's system for the caller (a student who has saved predictions) and stores the
- * simulation with each prediction set against it. Running again returns the stored result.
+ * simulation with each prediction set against it. Running again returns the stored result. A
+ * simulation that failed comes back with `ranAt` null and no outcomes: nothing is stored, the
+ * predictions stay open, and the student may run again.
  */
 export async function runLesson(
   deps: ClassroomDeps,
@@ -68,13 +70,9 @@ export async function runLesson(
     );
   if (answer.ranAt) return toMyAnswer(answer);
   const simulation = await deps.simulations.get(row.id, row.scenario);
-  if (simulation.status === 'failed' || simulation.status === 'cancelled') {
-    throw new HttpError(
-      503,
-      'LESSON_RUN_FAILED',
-      `The simulation did not finish (${simulation.error ?? 'no reason given'}); your predictions are kept, so run it again in a moment.`,
-    );
-  }
+  // A run that did not finish is an answer, not an error: it is shown, and nothing is locked.
+  if (simulation.status === 'failed' || simulation.status === 'cancelled')
+    return { ...toMyAnswer(answer), simulation };
   const results: StoredResults = {
     simulation,
     outcomes: grade(storedQuestions(row), storedPredictions(answer), simulation),

@@ -144,4 +144,32 @@ describe('StudentLesson', () => {
     );
     expect(root.querySelector('button.run-button')).toBeNull();
   });
+
+  it('shows a run that did not finish and lets the student run again', async () => {
+    const failed: MyAnswer = {
+      predictions: [
+        { questionId: 'regime', choice: 'cycling' },
+        { questionId: 'low', value: 0.4 },
+      ],
+      submittedAt: '2030-01-01T00:00:01.000Z',
+      ranAt: null,
+      simulation: {
+        status: 'failed',
+        error: 'Stopped at the 60 s time limit for one run.',
+        durationS: 3600,
+        verdict: null,
+        verdicts: [],
+        beds: [],
+        vessels: [],
+        levels: { t_s: [], channels: [] },
+      },
+      outcomes: null,
+    };
+    const { root } = await render({ ...LESSON, myAnswer: failed });
+    expect(root.querySelector('[role="alert"]')?.textContent).toContain(
+      'did not finish: Stopped at the 60 s time limit',
+    );
+    expect(button(root, 'Run the system').disabled).toBe(false);
+    expect(root.querySelector('table.outcomes')).toBeNull();
+  });
 });

@@ -65,7 +65,12 @@ export class StudentLesson {
   protected readonly busy = signal<'saving' | 'running' | null>(null);
   protected readonly problem = signal<string | null>(null);
   protected readonly answer = computed(() => this.lesson().myAnswer);
-  protected readonly ran = computed(() => this.answer()?.simulation != null);
+  protected readonly ran = computed(() => this.answer()?.ranAt != null);
+  /** Why the last run did not finish, when it did not (the predictions then stay open). */
+  protected readonly runFailure = computed(() => {
+    const answer = this.answer();
+    return answer && answer.ranAt === null && answer.simulation ? answer.simulation.error : null;
+  });
   protected readonly form = computed(() =>
     predictionForm(this.lesson().questions, this.answer()?.predictions ?? [], this.system()),
   );
