@@ -1,5 +1,9 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { AdminUserListSchema, AdminUserResponseSchema, OutboxListSchema } from '../../shared/contracts/admin';
+import {
+  AdminUserListSchema,
+  AdminUserResponseSchema,
+  OutboxListSchema,
+} from '../../shared/contracts/admin';
 import { ApiErrorSchema } from '../../shared/contracts/api-error';
 import { createApp } from '../app';
 import { createTestUser, signedInClient } from '../testing/test-client';
@@ -18,7 +22,10 @@ describe('the admin API', () => {
   it('lists users by e-mail without password hashes', async () => {
     const app = createApp(t.ctx);
     await createTestUser(t.ctx, { email: 'zed@example.test' });
-    const { client } = await signedInClient(app, t.ctx, { role: 'admin', email: 'admin@example.test' });
+    const { client } = await signedInClient(app, t.ctx, {
+      role: 'admin',
+      email: 'admin@example.test',
+    });
     const res = await client.get('/api/admin/users');
     const { users } = AdminUserListSchema.parse(res.body);
     expect(users.map((u) => u.email)).toEqual(['admin@example.test', 'zed@example.test']);
@@ -48,7 +55,13 @@ describe('the admin API', () => {
 
   it('answers 404 for an unknown or malformed user id and 400 naming an unknown role', async () => {
     const { client } = await signedInClient(createApp(t.ctx), t.ctx, { role: 'admin' });
-    expect((await client.patch('/api/admin/users/00000000-0000-4000-8000-000000000000').send({ role: 'member' })).status).toBe(404);
+    expect(
+      (
+        await client
+          .patch('/api/admin/users/00000000-0000-4000-8000-000000000000')
+          .send({ role: 'member' })
+      ).status,
+    ).toBe(404);
     expect((await client.patch('/api/admin/users/42').send({ role: 'member' })).status).toBe(404);
     const { user } = await createTestUser(t.ctx);
     const bad = await client.patch(`/api/admin/users/${user.id}`).send({ role: 'owner' });
@@ -58,9 +71,18 @@ describe('the admin API', () => {
 
   it('lists mail the local SMTP server received, newest first, as plain text', async () => {
     const mailer = t.ctx.mailer;
-    await mailer.send({ to: 'first@example.test', subject: 'Première', text: 'Open http://localhost:3000/x' });
+    await mailer.send({
+      to: 'first@example.test',
+      subject: 'Première',
+      text: 'Open http://localhost:3000/x',
+    });
     await waitForMail(t.ctx.db, 'first@example.test');
-    await mailer.send({ to: 'second@example.test', subject: 'Second', text: 'Body', html: '<script>alert(1)</script>' });
+    await mailer.send({
+      to: 'second@example.test',
+      subject: 'Second',
+      text: 'Body',
+      html: '<script>alert(1)</script>',
+    });
     await waitForMail(t.ctx.db, 'second@example.test');
     const { client } = await signedInClient(createApp(t.ctx), t.ctx, { role: 'admin' });
     const { messages } = OutboxListSchema.parse((await client.get('/api/admin/outbox')).body);
@@ -71,4 +93,3 @@ describe('the admin API', () => {
     expect(messages[0]?.from).toBe('no-reply@localhost');
   });
 });
-

@@ -1,6 +1,11 @@
 /** `/api/admin/*`: users and the outbox, for the admin role only. */
 import { Router } from 'express';
-import { AdminUserPatchSchema, type AdminUserList, type AdminUserResponse, type OutboxList } from '../../shared/contracts/admin';
+import {
+  AdminUserPatchSchema,
+  type AdminUserList,
+  type AdminUserResponse,
+  type OutboxList,
+} from '../../shared/contracts/admin';
 import type { AppContext } from '../app-context';
 import { currentUser } from '../auth/session-user';
 import { requireRole } from '../http/require-auth';
@@ -32,7 +37,10 @@ export function adminRouter(ctx: AppContext): Router {
       messages: rows.map((row) => ({
         id: row.id,
         from: row.fromAddress,
-        to: row.toAddresses.split(',').map((address) => address.trim()).filter(Boolean),
+        to: row.toAddresses
+          .split(',')
+          .map((address) => address.trim())
+          .filter(Boolean),
         subject: row.subject,
         text: row.textBody,
         receivedAt: row.receivedAt.toISOString(),

@@ -25,11 +25,22 @@ export async function listUsers(ctx: AppContext): Promise<AdminUser[]> {
  * Changes a user's role or disabled flag. An administrator cannot demote or disable themselves
  * (so there is always an administrator left). Disabling signs the user out everywhere.
  */
-export async function patchUser(ctx: AppContext, actor: SessionUser, userId: string, patch: AdminUserPatch): Promise<AdminUser> {
+export async function patchUser(
+  ctx: AppContext,
+  actor: SessionUser,
+  userId: string,
+  patch: AdminUserPatch,
+): Promise<AdminUser> {
   const target = UUID_PATTERN.test(userId) ? await findUserById(ctx.db, userId) : undefined;
   if (!target) throw notFound('That user');
-  if (target.id === actor.id && ((patch.role !== undefined && patch.role !== 'admin') || patch.disabled === true)) {
-    throw conflict('You cannot remove your own admin role or disable yourself; ask another administrator.', 'CANNOT_CHANGE_SELF');
+  if (
+    target.id === actor.id &&
+    ((patch.role !== undefined && patch.role !== 'admin') || patch.disabled === true)
+  ) {
+    throw conflict(
+      'You cannot remove your own admin role or disable yourself; ask another administrator.',
+      'CANNOT_CHANGE_SELF',
+    );
   }
   const [row] = await ctx.db
     .update(users)

@@ -21,10 +21,19 @@ describe('the auth API', () => {
     const client = await TestClient.create(createApp(t.ctx));
     const res = await client
       .post('/api/auth/register')
-      .send({ name: 'Rowan Reed', email: '  Rowan@Example.TEST ', password: 'gravel beds drain fast' });
+      .send({
+        name: 'Rowan Reed',
+        email: '  Rowan@Example.TEST ',
+        password: 'gravel beds drain fast',
+      });
     expect(res.status).toBe(201);
     const { user } = MeResponseSchema.parse(res.body);
-    expect(user).toMatchObject({ email: 'rowan@example.test', name: 'Rowan Reed', role: 'member', units: 'metric' });
+    expect(user).toMatchObject({
+      email: 'rowan@example.test',
+      name: 'Rowan Reed',
+      role: 'member',
+      units: 'metric',
+    });
     const me = await client.get('/api/auth/me');
     expect(MeResponseSchema.parse(me.body).user.id).toBe(user.id);
     const rows = await t.ctx.db.select().from(sessions);
@@ -46,12 +55,20 @@ describe('the auth API', () => {
 
   it('names each weak-password rule that failed', async () => {
     const client = await TestClient.create(createApp(t.ctx));
-    const short = await client.post('/api/auth/register').send({ name: 'A', email: 'a@example.test', password: 'short' });
+    const short = await client
+      .post('/api/auth/register')
+      .send({ name: 'A', email: 'a@example.test', password: 'short' });
     expect(short.status).toBe(400);
     expect(ApiErrorSchema.parse(short.body).error.fields?.map((f) => f.path)).toEqual(['password']);
-    const repeated = await client.post('/api/auth/register').send({ name: 'A', email: 'a@example.test', password: 'aaaaaaaaaaaa' });
-    expect(ApiErrorSchema.parse(repeated.body).error.fields?.[0]?.message).toMatch(/different characters/);
-    const ownName = await client.post('/api/auth/register').send({ name: 'A', email: 'marigold@example.test', password: 'marigold-2024-xyz' });
+    const repeated = await client
+      .post('/api/auth/register')
+      .send({ name: 'A', email: 'a@example.test', password: 'aaaaaaaaaaaa' });
+    expect(ApiErrorSchema.parse(repeated.body).error.fields?.[0]?.message).toMatch(
+      /different characters/,
+    );
+    const ownName = await client
+      .post('/api/auth/register')
+      .send({ name: 'A', email: 'marigold@example.test', password: 'marigold-2024-xyz' });
     expect(ApiErrorSchema.parse(ownName.body).error.fields?.[0]?.message).toMatch(/e-mail name/);
     expect(await t.ctx.db.select().from(users)).toHaveLength(0);
   });
@@ -87,7 +104,9 @@ describe('the auth API', () => {
         .set('X-XSRF-TOKEN', decodeURIComponent(xsrfCookie.split('=')[1] ?? ''))
         .send({ email: user.email, password });
       expect(res.status).toBe(200);
-      const cookie = (res.headers['set-cookie'] as unknown as string[]).find((c) => c.startsWith('tidewright.sid='));
+      const cookie = (res.headers['set-cookie'] as unknown as string[]).find((c) =>
+        c.startsWith('tidewright.sid='),
+      );
       expect(cookie).toMatch(/HttpOnly/);
       expect(cookie).toMatch(/SameSite=Lax/);
       expect(cookie).toMatch(/Secure/);
@@ -102,7 +121,10 @@ describe('the auth API', () => {
     const bare = await client.agent.post('/api/auth/login').send({ email: user.email, password });
     expect(bare.status).toBe(403);
     expect(ApiErrorSchema.parse(bare.body).error.code).toBe('CSRF_FAILED');
-    const wrong = await client.agent.post('/api/auth/login').set('X-XSRF-TOKEN', 'forged.value').send({ email: user.email, password });
+    const wrong = await client.agent
+      .post('/api/auth/login')
+      .set('X-XSRF-TOKEN', 'forged.value')
+      .send({ email: user.email, password });
     expect(wrong.status).toBe(403);
     expect(await t.ctx.db.select().from(sessions)).toHaveLength(0);
   });

@@ -24,11 +24,35 @@ export function authRouter(ctx: AppContext): Router {
   const router = Router();
   const { limits } = ctx.auth;
   const windowMs = limits.windowMs;
-  const loginPerIp = limiter({ what: 'failed sign-ins from this address', limit: limits.loginFailuresPerIp, windowMs, onlyFailures: true });
-  const loginPerAccount = limiter({ what: 'failed sign-ins for this account', limit: limits.loginFailuresPerAccount, windowMs, onlyFailures: true, byAccount: true });
-  const registerPerIp = limiter({ what: 'registrations from this address', limit: limits.registrationsPerIp, windowMs });
-  const resetPerIp = limiter({ what: 'password reset requests from this address', limit: limits.resetsPerIp, windowMs });
-  const resetPerAccount = limiter({ what: 'password reset requests for this address', limit: limits.resetsPerAccount, windowMs, byAccount: true });
+  const loginPerIp = limiter({
+    what: 'failed sign-ins from this address',
+    limit: limits.loginFailuresPerIp,
+    windowMs,
+    onlyFailures: true,
+  });
+  const loginPerAccount = limiter({
+    what: 'failed sign-ins for this account',
+    limit: limits.loginFailuresPerAccount,
+    windowMs,
+    onlyFailures: true,
+    byAccount: true,
+  });
+  const registerPerIp = limiter({
+    what: 'registrations from this address',
+    limit: limits.registrationsPerIp,
+    windowMs,
+  });
+  const resetPerIp = limiter({
+    what: 'password reset requests from this address',
+    limit: limits.resetsPerIp,
+    windowMs,
+  });
+  const resetPerAccount = limiter({
+    what: 'password reset requests for this address',
+    limit: limits.resetsPerAccount,
+    windowMs,
+    byAccount: true,
+  });
 
   router.post('/auth/register', registerPerIp, async (req, res) => {
     const input = parseOr400(RegisterRequestSchema, req.body);
@@ -41,7 +65,11 @@ export function authRouter(ctx: AppContext): Router {
     const input = parseOr400(LoginRequestSchema, req.body);
     const user = await verifyCredentials(ctx, input.email, input.password);
     if (!user) {
-      throw new HttpError(401, 'INVALID_CREDENTIALS', 'That e-mail and password do not match an account. Check both, or reset the password.');
+      throw new HttpError(
+        401,
+        'INVALID_CREDENTIALS',
+        'That e-mail and password do not match an account. Check both, or reset the password.',
+      );
     }
     await startUserSession(req, user.id, ctx.auth.now());
     res.json({ user } satisfies MeResponse);
@@ -65,9 +93,13 @@ export function authRouter(ctx: AppContext): Router {
   router.post('/auth/password-reset', resetPerIp, resetPerAccount, (req, res) => {
     const { email } = parseOr400(PasswordResetRequestSchema, req.body);
     // Answered before the work is done, so neither the answer nor its timing tells whether the address has an account.
-    requestPasswordReset(ctx, email).catch((error: unknown) => ctx.logger.error({ err: error }, 'password reset e-mail failed'));
+    requestPasswordReset(ctx, email).catch((error: unknown) =>
+      ctx.logger.error({ err: error }, 'password reset e-mail failed'),
+    );
     const minutes = Math.round(ctx.auth.resetTokenTtlMs / 60_000);
-    const body: PasswordResetAccepted = { message: `If an account uses that address, a reset link is on its way. It works for ${minutes} minutes.` };
+    const body: PasswordResetAccepted = {
+      message: `If an account uses that address, a reset link is on its way. It works for ${minutes} minutes.`,
+    };
     res.status(202).json(body);
   });
 

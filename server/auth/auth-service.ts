@@ -23,9 +23,17 @@ function decoyHash(cost: number): Promise<string> {
 /** Creates a `member` account; 409 `EMAIL_TAKEN` when the address already has one. */
 export async function registerUser(ctx: AppContext, input: RegisterRequest): Promise<User> {
   const passwordHash = await bcrypt.hash(input.password, ctx.auth.bcryptCost);
-  const row = await insertUser(ctx.db, { email: input.email, name: input.name, passwordHash, role: 'member' });
+  const row = await insertUser(ctx.db, {
+    email: input.email,
+    name: input.name,
+    passwordHash,
+    role: 'member',
+  });
   if (!row) {
-    throw conflict('An account already uses that e-mail address. Sign in, or reset its password.', 'EMAIL_TAKEN');
+    throw conflict(
+      'An account already uses that e-mail address. Sign in, or reset its password.',
+      'EMAIL_TAKEN',
+    );
   }
   return toUser(row);
 }
@@ -35,7 +43,11 @@ export async function registerUser(ctx: AppContext, input: RegisterRequest): Pro
  * a decoy hash of the same cost, so the answer takes as long as for a wrong password and the
  * timing does not tell which addresses have accounts. Disabled accounts fail the same way.
  */
-export async function verifyCredentials(ctx: AppContext, email: string, password: string): Promise<User | null> {
+export async function verifyCredentials(
+  ctx: AppContext,
+  email: string,
+  password: string,
+): Promise<User | null> {
   const row = await findUserByEmail(ctx.db, email);
   const hash = row?.passwordHash ?? (await decoyHash(ctx.auth.bcryptCost));
   const matches = await bcrypt.compare(password, hash);
@@ -44,7 +56,11 @@ export async function verifyCredentials(ctx: AppContext, email: string, password
 }
 
 /** Changes one's own name or unit system. */
-export async function updateProfile(ctx: AppContext, userId: string, changes: UpdateMeRequest): Promise<User> {
+export async function updateProfile(
+  ctx: AppContext,
+  userId: string,
+  changes: UpdateMeRequest,
+): Promise<User> {
   if (changes.name !== undefined || changes.units !== undefined) {
     await ctx.db
       .update(users)

@@ -6,7 +6,12 @@ function escapeHtml(text: string): string {
 }
 
 /** The message carrying the reset link; `ttlMs` is how long the link works. */
-export function passwordResetMail(to: string, name: string, link: string, ttlMs: number): OutgoingMail {
+export function passwordResetMail(
+  to: string,
+  name: string,
+  link: string,
+  ttlMs: number,
+): OutgoingMail {
   const minutes = Math.round(ttlMs / 60_000);
   const lines = [
     `Hello ${name},`,

@@ -48,7 +48,11 @@ export async function requestPasswordReset(ctx: AppContext, email: string): Prom
  * concurrent confirmations cannot both succeed. 400 `RESET_TOKEN_INVALID` for an unknown, used
  * or expired token. Returns the id of the user whose password changed.
  */
-export async function confirmPasswordReset(ctx: AppContext, token: string, password: string): Promise<string> {
+export async function confirmPasswordReset(
+  ctx: AppContext,
+  token: string,
+  password: string,
+): Promise<string> {
   const passwordHash = await bcrypt.hash(password, ctx.auth.bcryptCost);
   const now = new Date(ctx.auth.now());
   const [used] = await ctx.db
@@ -63,7 +67,11 @@ export async function confirmPasswordReset(ctx: AppContext, token: string, passw
     )
     .returning({ userId: passwordResets.userId });
   if (!used) {
-    throw new HttpError(400, 'RESET_TOKEN_INVALID', 'This reset link is invalid, used or expired. Ask for a new one from the sign-in page.');
+    throw new HttpError(
+      400,
+      'RESET_TOKEN_INVALID',
+      'This reset link is invalid, used or expired. Ask for a new one from the sign-in page.',
+    );
   }
   await setPasswordHash(ctx.db, used.userId, passwordHash);
   await destroyUserSessions(ctx.db, used.userId);

@@ -20,7 +20,10 @@ describe('requireSystemAccess', () => {
     const editor = (await createTestUser(t.ctx)).user;
     const stranger = (await createTestUser(t.ctx)).user;
     const admin = (await createTestUser(t.ctx, { role: 'admin' })).user;
-    const [system] = await t.ctx.db.insert(systems).values({ ownerId: owner.id, name: 'Greenhouse', scenario: {} }).returning();
+    const [system] = await t.ctx.db
+      .insert(systems)
+      .values({ ownerId: owner.id, name: 'Greenhouse', scenario: {} })
+      .returning();
     if (!system) throw new Error('no system inserted');
     await t.ctx.db.insert(systemShares).values([
       { systemId: system.id, userId: viewer.id, access: 'viewer' },
@@ -29,7 +32,11 @@ describe('requireSystemAccess', () => {
     return { owner, viewer, editor, stranger, admin, systemId: system.id };
   }
 
-  async function outcome(user: { id: string }, systemId: string, need: SystemAccessNeed): Promise<string | number> {
+  async function outcome(
+    user: { id: string },
+    systemId: string,
+    need: SystemAccessNeed,
+  ): Promise<string | number> {
     try {
       return (await requireSystemAccess(t.ctx.db, user, systemId, need)).access;
     } catch (error) {
@@ -48,12 +55,12 @@ describe('requireSystemAccess', () => {
       ['admin (no special access)', w.admin, 404, 404, 404],
     ];
     for (const [who, user, read, write, owner] of table) {
-      expect([who, await outcome(user, w.systemId, 'read'), await outcome(user, w.systemId, 'write'), await outcome(user, w.systemId, 'owner')]).toEqual([
+      expect([
         who,
-        read,
-        write,
-        owner,
-      ]);
+        await outcome(user, w.systemId, 'read'),
+        await outcome(user, w.systemId, 'write'),
+        await outcome(user, w.systemId, 'owner'),
+      ]).toEqual([who, read, write, owner]);
     }
   });
 

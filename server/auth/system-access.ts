@@ -40,7 +40,10 @@ export async function findSystemAccess(
   const [row] = await db
     .select({ system: systems, shareAccess: systemShares.access })
     .from(systems)
-    .leftJoin(systemShares, and(eq(systemShares.systemId, systems.id), eq(systemShares.userId, userId)))
+    .leftJoin(
+      systemShares,
+      and(eq(systemShares.systemId, systems.id), eq(systemShares.userId, userId)),
+    )
     .where(eq(systems.id, systemId));
   if (!row) return null;
   if (row.system.ownerId === userId) return { system: row.system, access: 'owner' };
@@ -65,7 +68,11 @@ export async function requireSystemAccess(
   if (!found) throw notFound('That system');
   if (!ALLOWED[need].includes(found.access)) {
     throw need === 'write'
-      ? new HttpError(403, 'SYSTEM_READ_ONLY', 'This system is shared with you to view only; ask its owner for editor access or duplicate it.')
+      ? new HttpError(
+          403,
+          'SYSTEM_READ_ONLY',
+          'This system is shared with you to view only; ask its owner for editor access or duplicate it.',
+        )
       : new HttpError(403, 'NOT_SYSTEM_OWNER', 'Only the owner of this system can do that.');
   }
   return found;

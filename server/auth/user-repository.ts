@@ -1,6 +1,11 @@
 /** Reads and writes `users` rows; callers get the public `User` shape through `toUser`. */
 import { eq, sql } from 'drizzle-orm';
-import { UnitSystemSchema, UserRoleSchema, type User, type UserRole } from '../../shared/contracts/auth';
+import {
+  UnitSystemSchema,
+  UserRoleSchema,
+  type User,
+  type UserRole,
+} from '../../shared/contracts/auth';
 import type { Database } from '../db/database';
 import { users } from '../db/schema';
 
@@ -47,6 +52,10 @@ export async function insertUser(
 }
 
 /** Replaces a user's password hash. */
-export async function setPasswordHash(db: Database, userId: string, passwordHash: string): Promise<void> {
+export async function setPasswordHash(
+  db: Database,
+  userId: string,
+  passwordHash: string,
+): Promise<void> {
   await db.update(users).set({ passwordHash, updatedAt: new Date() }).where(eq(users.id, userId));
 }

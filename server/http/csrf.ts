@@ -36,7 +36,8 @@ function sameText(a: string, b: string): boolean {
 /** Issues and checks CSRF tokens signed with a key derived from `secret`. */
 export function csrfProtection(secret: string): RequestHandler {
   const key = createHmac('sha256', secret).update('tidewright csrf token').digest();
-  const sign = (nonce: string): string => createHmac('sha256', key).update(nonce).digest('base64url');
+  const sign = (nonce: string): string =>
+    createHmac('sha256', key).update(nonce).digest('base64url');
   const isGenuine = (token: string | undefined): token is string => {
     const [nonce, mac, extra] = (token ?? '').split('.');
     return !!nonce && !!mac && extra === undefined && sameText(mac, sign(nonce));
@@ -46,12 +47,20 @@ export function csrfProtection(secret: string): RequestHandler {
     const genuine = isGenuine(token);
     if (!genuine) {
       const nonce = randomBytes(24).toString('base64url');
-      res.cookie(XSRF_COOKIE, `${nonce}.${sign(nonce)}`, { sameSite: 'lax', secure: req.secure, path: '/' });
+      res.cookie(XSRF_COOKIE, `${nonce}.${sign(nonce)}`, {
+        sameSite: 'lax',
+        secure: req.secure,
+        path: '/',
+      });
     }
     if (SAFE_METHODS.has(req.method)) return next();
     const echoed = req.get(XSRF_HEADER);
     if (!genuine || !echoed || !sameText(echoed, token)) {
-      throw new HttpError(403, 'CSRF_FAILED', 'This request lacks its security token (the XSRF-TOKEN cookie echoed in X-XSRF-TOKEN). Reload the page and try again.');
+      throw new HttpError(
+        403,
+        'CSRF_FAILED',
+        'This request lacks its security token (the XSRF-TOKEN cookie echoed in X-XSRF-TOKEN). Reload the page and try again.',
+      );
     }
     next();
   };

@@ -20,7 +20,9 @@ export function requireRole(...roles: readonly UserRole[]): RequestHandler {
   return (req, _res, next) => {
     if (!req.user) throw unauthorized();
     if (!allowed.has(req.user.role)) {
-      throw forbidden(`This needs the ${roles.join(' or ')} role; ask an administrator if you should have it.`);
+      throw forbidden(
+        `This needs the ${roles.join(' or ')} role; ask an administrator if you should have it.`,
+      );
     }
     next();
   };

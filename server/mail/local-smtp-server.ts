@@ -37,7 +37,8 @@ function createServer(db: Database): SMTPServer {
       stream.on('data', (chunk: Buffer) => chunks.push(chunk));
       stream.on('error', (error: Error) => callback(error));
       stream.on('end', () => {
-        if (stream.sizeExceeded) return callback(Object.assign(new Error('Message too large'), { responseCode: 552 }));
+        if (stream.sizeExceeded)
+          return callback(Object.assign(new Error('Message too large'), { responseCode: 552 }));
         const raw = Buffer.concat(chunks).toString('utf8');
         const parsed = parseMailMessage(raw);
         const from = session.envelope.mailFrom ? session.envelope.mailFrom.address : '';

@@ -9,7 +9,14 @@ export type MailMessageRow = typeof mailMessages.$inferSelect;
 /** Stores one received message. */
 export async function insertMailMessage(
   db: Database,
-  message: { fromAddress: string; toAddresses: string[]; subject: string; textBody: string; htmlBody: string | null; raw: string },
+  message: {
+    fromAddress: string;
+    toAddresses: string[];
+    subject: string;
+    textBody: string;
+    htmlBody: string | null;
+    raw: string;
+  },
 ): Promise<void> {
   await db.insert(mailMessages).values({ ...message, toAddresses: message.toAddresses.join(', ') });
 }

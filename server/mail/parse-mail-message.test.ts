@@ -19,13 +19,21 @@ describe('parseMailMessage', () => {
     });
     expect(raw).toMatch(/quoted-printable|base64/i);
     const parsed = parseMailMessage(raw);
-    expect(parsed.subject).toBe('Kühlwasser ✓ and a rather long subject line that nodemailer folds across lines');
+    expect(parsed.subject).toBe(
+      'Kühlwasser ✓ and a rather long subject line that nodemailer folds across lines',
+    );
     expect(parsed.text).toBe(text);
     expect(parsed.html).toBe('<p>Grüße</p>');
   });
 
   it('reads a single-part base64 body', async () => {
-    const raw = await compose({ from: 'a@example.test', to: 'b@example.test', subject: 'Plain', text: 'ünïcödé '.repeat(40), textEncoding: 'base64' });
+    const raw = await compose({
+      from: 'a@example.test',
+      to: 'b@example.test',
+      subject: 'Plain',
+      text: 'ünïcödé '.repeat(40),
+      textEncoding: 'base64',
+    });
     expect(raw).toMatch(/Content-Transfer-Encoding: base64/);
     const parsed = parseMailMessage(raw);
     expect(parsed.text).toBe('ünïcödé '.repeat(40).trimEnd());

@@ -23,7 +23,8 @@ function splitPart(raw: string): MimePart {
   const headers = new Map<string, string>();
   for (const line of head.replace(/\r?\n[ \t]+/g, ' ').split(/\r?\n/)) {
     const colon = line.indexOf(':');
-    if (colon > 0) headers.set(line.slice(0, colon).trim().toLowerCase(), line.slice(colon + 1).trim());
+    if (colon > 0)
+      headers.set(line.slice(0, colon).trim().toLowerCase(), line.slice(colon + 1).trim());
   }
   return { headers, body };
 }
@@ -60,22 +61,29 @@ function quotedPrintableBytes(text: string): Uint8Array {
 export function decodeEncodedWords(value: string): string {
   return value
     .replace(/(=\?[^?]+\?[BbQq]\?[^?]*\?=)\s+(?==\?)/g, '$1')
-    .replace(/=\?([^?]+)\?([BbQq])\?([^?]*)\?=/g, (_all, charset: string, encoding: string, text: string) =>
-      encoding.toUpperCase() === 'B'
-        ? decodeBytes(Buffer.from(text, 'base64'), charset)
-        : decodeBytes(quotedPrintableBytes(text.replace(/_/g, ' ')), charset),
+    .replace(
+      /=\?([^?]+)\?([BbQq])\?([^?]*)\?=/g,
+      (_all, charset: string, encoding: string, text: string) =>
+        encoding.toUpperCase() === 'B'
+          ? decodeBytes(Buffer.from(text, 'base64'), charset)
+          : decodeBytes(quotedPrintableBytes(text.replace(/_/g, ' ')), charset),
     );
 }
 
 function decodeBody(part: MimePart): string {
   const encoding = (part.headers.get('content-transfer-encoding') ?? '7bit').toLowerCase();
   const charset = headerParam(part.headers.get('content-type') ?? '', 'charset') ?? 'utf-8';
-  if (encoding === 'base64') return decodeBytes(Buffer.from(part.body.replace(/\s+/g, ''), 'base64'), charset);
+  if (encoding === 'base64')
+    return decodeBytes(Buffer.from(part.body.replace(/\s+/g, ''), 'base64'), charset);
   if (encoding === 'quoted-printable') return decodeBytes(quotedPrintableBytes(part.body), charset);
   return part.body;
 }
 
-function collectBodies(part: MimePart, found: { text: string | null; html: string | null }, depth: number): void {
+function collectBodies(
+  part: MimePart,
+  found: { text: string | null; html: string | null },
+  depth: number,
+): void {
   const type = part.headers.get('content-type') ?? 'text/plain';
   const mediaType = (type.split(';')[0] ?? '').trim().toLowerCase();
   const boundary = headerParam(type, 'boundary');
@@ -89,7 +97,8 @@ function collectBodies(part: MimePart, found: { text: string | null; html: strin
     }
     return;
   }
-  if (mediaType === 'text/plain' && found.text === null) found.text = decodeBody(part).replace(/\r\n/g, '\n');
+  if (mediaType === 'text/plain' && found.text === null)
+    found.text = decodeBody(part).replace(/\r\n/g, '\n');
   if (mediaType === 'text/html' && found.html === null) found.html = decodeBody(part);
 }
 

@@ -32,7 +32,9 @@ describe('startMail', () => {
   it('sends nothing in production without SMTP_URL, and says how to fix it', async () => {
     const config = loadConfig({ NODE_ENV: 'production', SMTP_PORT: '0' });
     const mail = await startMail(config, t.ctx.db, 'Tidewright <no-reply@prod.test>', silent);
-    await expect(mail.mailer.send({ to: 'a@example.test', subject: 'x', text: 'y' })).rejects.toThrow(/SMTP_URL/);
+    await expect(
+      mail.mailer.send({ to: 'a@example.test', subject: 'x', text: 'y' }),
+    ).rejects.toThrow(/SMTP_URL/);
     expect(await t.ctx.db.select().from(mailMessages)).toHaveLength(0);
     await mail.close();
   });
@@ -44,11 +46,22 @@ describe('startMail', () => {
     const takenPort = (taken.address() as AddressInfo).port;
     const notes: string[] = [];
     const logger = pino({ level: 'warn' }, { write: (line: string) => void notes.push(line) });
-    const mail = await startMail(loadConfig({ SMTP_PORT: String(takenPort) }), t.ctx.db, 'b <b@localhost>', logger);
+    const mail = await startMail(
+      loadConfig({ SMTP_PORT: String(takenPort) }),
+      t.ctx.db,
+      'b <b@localhost>',
+      logger,
+    );
     try {
       expect(notes.join('')).toContain(`SMTP port ${takenPort} is taken`);
-      await mail.mailer.send({ to: 'fallback@example.test', subject: 'Fallback', text: 'still delivered' });
-      expect((await waitForMail(t.ctx.db, 'fallback@example.test')).textBody).toBe('still delivered');
+      await mail.mailer.send({
+        to: 'fallback@example.test',
+        subject: 'Fallback',
+        text: 'still delivered',
+      });
+      expect((await waitForMail(t.ctx.db, 'fallback@example.test')).textBody).toBe(
+        'still delivered',
+      );
     } finally {
       await mail.close();
       taken.close();

@@ -17,7 +17,12 @@ export interface MailSetup {
  * stores mail for the admin Outbox. In production without SMTP_URL, mail cannot be sent: each
  * attempt fails and is logged, and password reset tells nobody.
  */
-export async function startMail(config: Config, db: Database, from: string, logger: Logger): Promise<MailSetup> {
+export async function startMail(
+  config: Config,
+  db: Database,
+  from: string,
+  logger: Logger,
+): Promise<MailSetup> {
   if (config.smtpUrl) {
     const mailer = createSmtpMailer(config.smtpUrl, from);
     return { mailer, close: async () => mailer.close() };
@@ -33,7 +38,9 @@ export async function startMail(config: Config, db: Database, from: string, logg
   const server = await startLocalSmtpServer(db, config.smtpPort, (wanted, used) =>
     logger.warn(`SMTP port ${wanted} is taken; the local outbox listens on ${used} instead.`),
   );
-  logger.info(`Local outbox SMTP server on 127.0.0.1:${server.port}; read mail under Admin → Outbox.`);
+  logger.info(
+    `Local outbox SMTP server on 127.0.0.1:${server.port}; read mail under Admin → Outbox.`,
+  );
   const mailer = createLocalMailer(server.port, from);
   return {
     mailer,

@@ -18,7 +18,10 @@ function expiryOf(sess: SessionData, nowMs: number): Date {
 }
 
 /** Calls back with the outcome of a promise, the way express-session expects. */
-function settle<T>(work: Promise<T>, callback: ((err: unknown, value?: T) => void) | undefined): void {
+function settle<T>(
+  work: Promise<T>,
+  callback: ((err: unknown, value?: T) => void) | undefined,
+): void {
   work.then(
     (value) => callback?.(null, value),
     (error: unknown) => callback?.(error),
@@ -54,19 +57,31 @@ export class DrizzleSessionStore extends session.Store {
   }
 
   override touch(sid: string, sess: SessionData, callback?: () => void): void {
-    const work = this.db.update(sessions).set({ expire: expiryOf(sess, Date.now()) }).where(eq(sessions.sid, sid));
+    const work = this.db
+      .update(sessions)
+      .set({ expire: expiryOf(sess, Date.now()) })
+      .where(eq(sessions.sid, sid));
     settle(work, () => callback?.());
   }
 
   /** Deletes expired rows; main.ts runs it on an interval. Returns how many went. */
   async prune(): Promise<number> {
-    const gone = await this.db.delete(sessions).where(lt(sessions.expire, new Date())).returning({ sid: sessions.sid });
+    const gone = await this.db
+      .delete(sessions)
+      .where(lt(sessions.expire, new Date()))
+      .returning({ sid: sessions.sid });
     return gone.length;
   }
 }
 
 /** Signs a user out everywhere (after a password change or when disabled), optionally keeping one session. */
-export async function destroyUserSessions(db: Database, userId: string, exceptSid?: string): Promise<void> {
+export async function destroyUserSessions(
+  db: Database,
+  userId: string,
+  exceptSid?: string,
+): Promise<void> {
   const ofUser = sql`${sessions.sess}->>'userId' = ${userId}`;
-  await db.delete(sessions).where(exceptSid ? and(ofUser, sql`${sessions.sid} <> ${exceptSid}`) : ofUser);
+  await db
+    .delete(sessions)
+    .where(exceptSid ? and(ofUser, sql`${sessions.sid} <> ${exceptSid}`) : ofUser);
 }

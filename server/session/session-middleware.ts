@@ -19,7 +19,13 @@ export function sessionMiddleware(ctx: AppContext): RequestHandler[] {
     saveUninitialized: false,
     rolling: true,
     unset: 'destroy',
-    cookie: { httpOnly: true, sameSite: 'lax', secure: 'auto', path: '/', maxAge: ctx.auth.idleTimeoutMs },
+    cookie: {
+      httpOnly: true,
+      sameSite: 'lax',
+      secure: 'auto',
+      path: '/',
+      maxAge: ctx.auth.idleTimeoutMs,
+    },
   });
   return [handler, loadSessionUser(ctx)];
 }

@@ -10,7 +10,9 @@ import type { Config } from '../config';
 export class MissingSessionSecretError extends Error {
   readonly code = 'MISSING_SESSION_SECRET';
   constructor() {
-    super('Set SESSION_SECRET to a random string of at least 32 characters (e.g. `openssl rand -hex 32`) before starting in production.');
+    super(
+      'Set SESSION_SECRET to a random string of at least 32 characters (e.g. `openssl rand -hex 32`) before starting in production.',
+    );
   }
 }
 

@@ -11,7 +11,16 @@ describe('sessions', () => {
   let nowMs: number;
   beforeEach(async () => {
     nowMs = Date.parse('2026-03-01T08:00:00Z');
-    t = await createTestContext({}, { auth: { now: () => nowMs, idleTimeoutMs: 30 * MINUTE_MS, absoluteTimeoutMs: 8 * 60 * MINUTE_MS } });
+    t = await createTestContext(
+      {},
+      {
+        auth: {
+          now: () => nowMs,
+          idleTimeoutMs: 30 * MINUTE_MS,
+          absoluteTimeoutMs: 8 * 60 * MINUTE_MS,
+        },
+      },
+    );
   });
   afterEach(async () => {
     await t.close();
@@ -21,7 +30,12 @@ describe('sessions', () => {
     const { user, password } = await createTestUser(t.ctx);
     const client = await TestClient.create(createApp(t.ctx));
     await client.signIn(user.email, password);
-    const cookies = client.agent.jar.getCookies({ domain: '127.0.0.1', path: '/', secure: false, script: false });
+    const cookies = client.agent.jar.getCookies({
+      domain: '127.0.0.1',
+      path: '/',
+      secure: false,
+      script: false,
+    });
     const restarted = await TestClient.create(createApp(t.ctx));
     for (const cookie of cookies) restarted.agent.jar.setCookie(cookie);
     const me = await restarted.get('/api/auth/me');
@@ -35,7 +49,10 @@ describe('sessions', () => {
     await client.signIn(user.email, password);
     for (let i = 0; i < 4; i++) {
       nowMs += 20 * MINUTE_MS;
-      expect((await client.get('/api/auth/me')).status, `after ${(i + 1) * 20} active minutes`).toBe(200);
+      expect(
+        (await client.get('/api/auth/me')).status,
+        `after ${(i + 1) * 20} active minutes`,
+      ).toBe(200);
     }
     nowMs += 31 * MINUTE_MS;
     expect((await client.get('/api/auth/me')).status).toBe(401);
@@ -80,10 +97,19 @@ describe('sessions', () => {
     const { user, password } = await createTestUser(t.ctx);
     const client = await TestClient.create(createApp(t.ctx));
     await client.signIn(user.email, password);
-    const other = createApp({ ...t.ctx, auth: { ...t.ctx.auth, sessionSecret: 'a different secret of enough length' } });
-    const cookies = client.agent.jar.getCookies({ domain: '127.0.0.1', path: '/', secure: false, script: false });
+    const other = createApp({
+      ...t.ctx,
+      auth: { ...t.ctx.auth, sessionSecret: 'a different secret of enough length' },
+    });
+    const cookies = client.agent.jar.getCookies({
+      domain: '127.0.0.1',
+      path: '/',
+      secure: false,
+      script: false,
+    });
     const stranger = await TestClient.create(other);
-    for (const cookie of cookies.filter((c) => c.name === 'tidewright.sid')) stranger.agent.jar.setCookie(cookie);
+    for (const cookie of cookies.filter((c) => c.name === 'tidewright.sid'))
+      stranger.agent.jar.setCookie(cookie);
     expect((await stranger.get('/api/auth/me')).status).toBe(401);
   });
 });

@@ -43,7 +43,8 @@ export async function endUserSession(req: Request): Promise<void> {
 /** Why a stored session no longer signs anyone in, or null while it is valid. */
 function expiredReason(req: Request, nowMs: number, ctx: AppContext): string | null {
   const { signedInAtMs, lastSeenAtMs } = req.session;
-  if (signedInAtMs === undefined || nowMs - signedInAtMs > ctx.auth.absoluteTimeoutMs) return 'absolute';
+  if (signedInAtMs === undefined || nowMs - signedInAtMs > ctx.auth.absoluteTimeoutMs)
+    return 'absolute';
   if (lastSeenAtMs === undefined || nowMs - lastSeenAtMs > ctx.auth.idleTimeoutMs) return 'idle';
   return null;
 }
@@ -54,14 +55,16 @@ export function loadSessionUser(ctx: AppContext): RequestHandler {
     const userId = req.session?.userId;
     if (!userId) return next();
     const nowMs = ctx.auth.now();
-    const row = expiredReason(req, nowMs, ctx) === null ? await findUserById(ctx.db, userId) : undefined;
+    const row =
+      expiredReason(req, nowMs, ctx) === null ? await findUserById(ctx.db, userId) : undefined;
     if (!row || row.disabled) {
       // A fresh empty session (not destroy): this request may go on to sign in or register.
       await promised((done) => req.session.regenerate(done));
       return next();
     }
     req.user = toUser(row);
-    if (nowMs - (req.session.lastSeenAtMs ?? 0) >= LAST_SEEN_RESOLUTION_MS) req.session.lastSeenAtMs = nowMs;
+    if (nowMs - (req.session.lastSeenAtMs ?? 0) >= LAST_SEEN_RESOLUTION_MS)
+      req.session.lastSeenAtMs = nowMs;
     next();
   };
 }

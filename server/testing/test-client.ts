@@ -41,7 +41,10 @@ export class TestClient {
     const agent = request.agent(app);
     const res = await agent.get('/api/health');
     const token = xsrfFromSetCookie(res.headers['set-cookie']);
-    if (!token) throw new Error('GET /api/health set no XSRF-TOKEN cookie; is csrfProtection mounted on /api?');
+    if (!token)
+      throw new Error(
+        'GET /api/health set no XSRF-TOKEN cookie; is csrfProtection mounted on /api?',
+      );
     return new TestClient(agent, token);
   }
 
@@ -73,7 +76,8 @@ export class TestClient {
   /** Signs in through `POST /api/auth/login`; throws with the answer when it is not 200. */
   async signIn(email: string, password: string = TEST_PASSWORD): Promise<User> {
     const res = await this.post('/api/auth/login').send({ email, password });
-    if (res.status !== 200) throw new Error(`Sign-in as ${email} answered ${res.status}: ${JSON.stringify(res.body)}`);
+    if (res.status !== 200)
+      throw new Error(`Sign-in as ${email} answered ${res.status}: ${JSON.stringify(res.body)}`);
     return (res.body as { user: User }).user;
   }
 }
@@ -87,7 +91,10 @@ export interface TestUserOptions {
 }
 
 /** Inserts a user directly (bcrypt cost 4, fast) and returns it with its password. */
-export async function createTestUser(ctx: AppContext, options: TestUserOptions = {}): Promise<{ user: User; password: string }> {
+export async function createTestUser(
+  ctx: AppContext,
+  options: TestUserOptions = {},
+): Promise<{ user: User; password: string }> {
   const role = options.role ?? 'member';
   const password = options.password ?? TEST_PASSWORD;
   const email = options.email ?? `${role}-${randomUUID().slice(0, 8)}@example.test`;

@@ -5,7 +5,11 @@ import { mailMessages } from '../db/schema';
 import type { MailMessageRow } from '../mail/mail-message-repository';
 
 /** Polls `mail_messages` for the newest message to `to` (every 25 ms, up to `timeoutMs`). */
-export async function waitForMail(db: Database, to: string, timeoutMs = 5_000): Promise<MailMessageRow> {
+export async function waitForMail(
+  db: Database,
+  to: string,
+  timeoutMs = 5_000,
+): Promise<MailMessageRow> {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
     const [row] = await db

@@ -59,7 +59,10 @@ const COMMON_PASSWORDS = new Set([
  */
 export const PasswordSchema = z
   .string()
-  .min(PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters; a short sentence works well.`)
+  .min(
+    PASSWORD_MIN_LENGTH,
+    `Use at least ${PASSWORD_MIN_LENGTH} characters; a short sentence works well.`,
+  )
   .refine((value) => new TextEncoder().encode(value).length <= PASSWORD_MAX_BYTES, {
     message: `Use at most ${PASSWORD_MAX_BYTES} bytes (about ${PASSWORD_MAX_BYTES} letters).`,
   })
@@ -73,14 +76,22 @@ export const PasswordSchema = z
 /** `POST /api/auth/register`. */
 export const RegisterRequestSchema = z
   .strictObject({
-    name: z.string().trim().min(1, 'Enter your name.').max(120, 'A name has at most 120 characters.'),
+    name: z
+      .string()
+      .trim()
+      .min(1, 'Enter your name.')
+      .max(120, 'A name has at most 120 characters.'),
     email: EmailSchema,
     password: PasswordSchema,
   })
   .superRefine((value, ctx) => {
     const localPart = value.email.split('@')[0] ?? '';
     if (localPart.length >= 4 && value.password.toLowerCase().includes(localPart)) {
-      ctx.addIssue({ code: 'custom', path: ['password'], message: 'Do not use your e-mail name in the password.' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['password'],
+        message: 'Do not use your e-mail name in the password.',
+      });
     }
   });
 /** A registration. */
@@ -119,7 +130,10 @@ export type PasswordResetAccepted = z.infer<typeof PasswordResetAcceptedSchema>;
 
 /** `POST /api/auth/password-reset/confirm`: the token from the e-mailed link and the new password. */
 export const PasswordResetConfirmSchema = z.strictObject({
-  token: z.string().min(20, 'The reset link is incomplete; open it again from the e-mail.').max(200),
+  token: z
+    .string()
+    .min(20, 'The reset link is incomplete; open it again from the e-mail.')
+    .max(200),
   password: PasswordSchema,
 });
 /** A reset confirmation. */

@@ -10,7 +10,11 @@ interface LayerLike {
 
 const METHODS: readonly HttpMethod[] = ['get', 'post', 'put', 'patch', 'delete'];
 
-function walk(stack: readonly LayerLike[], prefix: string, out: { method: HttpMethod; path: string }[]): void {
+function walk(
+  stack: readonly LayerLike[],
+  prefix: string,
+  out: { method: HttpMethod; path: string }[],
+): void {
   for (const layer of stack) {
     if (layer.route && typeof layer.route.path === 'string') {
       for (const method of METHODS) {
@@ -24,7 +28,10 @@ function walk(stack: readonly LayerLike[], prefix: string, out: { method: HttpMe
 }
 
 /** Every `{method, path}` served by `router` when mounted at `prefix` (e.g. `/api`). */
-export function listApiRoutes(router: Router, prefix: string): { method: HttpMethod; path: string }[] {
+export function listApiRoutes(
+  router: Router,
+  prefix: string,
+): { method: HttpMethod; path: string }[] {
   const out: { method: HttpMethod; path: string }[] = [];
   walk((router as unknown as { stack: LayerLike[] }).stack, prefix, out);
   return out;

@@ -42,50 +42,77 @@ describe('malformed bodies on every mutating route', () => {
     return { client, path: fillPath(route.path, fixture.params), body };
   }
 
-  async function expectNothingStored(send: () => Promise<{ status: number; body: unknown }>, label = '') {
+  async function expectNothingStored(
+    send: () => Promise<{ status: number; body: unknown }>,
+    label = '',
+  ) {
     const before = await snapshotDatabase(t.ctx.db);
     const res = await send();
-    expect(await snapshotDatabase(t.ctx.db), `${label} answered ${res.status} and changed the database`).toEqual(before);
+    expect(
+      await snapshotDatabase(t.ctx.db),
+      `${label} answered ${res.status} and changed the database`,
+    ).toEqual(before);
     return { status: res.status, error: ApiErrorSchema.parse(res.body).error };
   }
 
-  const withBodies = allRoutes.filter(
-    (r) => isMutating(r) && r.body !== undefined,
-  );
+  const withBodies = allRoutes.filter((r) => isMutating(r) && r.body !== undefined);
   const titled = withBodies.map((r) => [routeTitle(r), r] as const);
 
   it.each(titled)('%s answers 400 INVALID_JSON to malformed JSON', async (_title, route) => {
     const { client, path } = await setUp(route);
-    const { status, error } = await expectNothingStored(() => client.send(route.method, path).set('content-type', 'application/json').send('{"name": "unterminated'));
+    const { status, error } = await expectNothingStored(() =>
+      client
+        .send(route.method, path)
+        .set('content-type', 'application/json')
+        .send('{"name": "unterminated'),
+    );
     expect([status, error.code]).toEqual([400, 'INVALID_JSON']);
   });
 
   it.each(titled)('%s answers 413 BODY_TOO_LARGE to a body over 1 MB', async (_title, route) => {
     const { client, path, body } = await setUp(route);
-    const { status, error } = await expectNothingStored(() => client.send(route.method, path).send({ ...body, padding: 'x'.repeat(1_100_000) }));
+    const { status, error } = await expectNothingStored(() =>
+      client.send(route.method, path).send({ ...body, padding: 'x'.repeat(1_100_000) }),
+    );
     expect([status, error.code]).toEqual([413, 'BODY_TOO_LARGE']);
   });
 
   it.each(titled)('%s answers 400 naming an unknown field', async (_title, route) => {
     const { client, path, body } = await setUp(route);
-    const { status, error } = await expectNothingStored(() => client.send(route.method, path).send({ ...body, sneakyExtra: true }));
+    const { status, error } = await expectNothingStored(() =>
+      client.send(route.method, path).send({ ...body, sneakyExtra: true }),
+    );
     expect(status).toBe(400);
     expect(JSON.stringify(error.fields)).toContain('sneakyExtra');
   });
 
-  it.each(titled)('%s answers 400 naming each field sent with the wrong type', async (_title, route) => {
-    const { client, path, body } = await setUp(route);
-    for (const key of Object.keys(body).filter((k) => !route.anyTypeFields?.includes(k))) {
-      const { status, error } = await expectNothingStored(() => client.send(route.method, path).send({ ...body, [key]: wrongTypeFor(body[key]) }), `field ${key}`);
-      expect(status, `field ${key}`).toBe(400);
-      expect(error.fields?.map((f) => f.path.split(/[.[]/)[0]), `field ${key}`).toContain(key);
-    }
-  });
+  it.each(titled)(
+    '%s answers 400 naming each field sent with the wrong type',
+    async (_title, route) => {
+      const { client, path, body } = await setUp(route);
+      for (const key of Object.keys(body).filter((k) => !route.anyTypeFields?.includes(k))) {
+        const { status, error } = await expectNothingStored(
+          () => client.send(route.method, path).send({ ...body, [key]: wrongTypeFor(body[key]) }),
+          `field ${key}`,
+        );
+        expect(status, `field ${key}`).toBe(400);
+        expect(
+          error.fields?.map((f) => f.path.split(/[.[]/)[0]),
+          `field ${key}`,
+        ).toContain(key);
+      }
+    },
+  );
 
   it.each(titled)('%s answers 400 to a body that is not an object', async (_title, route) => {
     const { client, path } = await setUp(route);
     for (const wrong of [[1, 2, 3], 'just text', 42, null]) {
-      const { status } = await expectNothingStored(() => client.send(route.method, path).set('content-type', 'application/json').send(JSON.stringify(wrong)));
+      const { status } = await expectNothingStored(() =>
+        client
+          .send(route.method, path)
+          .set('content-type', 'application/json')
+          .send(JSON.stringify(wrong)),
+      );
       expect(status, JSON.stringify(wrong)).toBe(400);
     }
   });

@@ -25,7 +25,10 @@ export async function createRouteFixture(ctx: AppContext, route: RouteCase): Pro
 export function fillPath(path: string, params: Record<string, string>): string {
   return path.replace(/:([A-Za-z0-9_]+)/g, (_all, name: string) => {
     const value = params[name];
-    if (value === undefined) throw new Error(`No fixture step sets params.${name} for ${path}; add one to its route group.`);
+    if (value === undefined)
+      throw new Error(
+        `No fixture step sets params.${name} for ${path}; add one to its route group.`,
+      );
     return encodeURIComponent(value);
   });
 }

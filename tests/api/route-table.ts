@@ -72,7 +72,16 @@ export interface RouteGroup {
 }
 
 /** Every group; the authz test requires that together they list every route of the app. */
-export const routeGroups: readonly RouteGroup[] = [healthRoutes, authRoutes, adminRoutes, systemsRoutes, runsRoutes, classroomRoutes, measurementsRoutes, sweepsRoutes];
+export const routeGroups: readonly RouteGroup[] = [
+  healthRoutes,
+  authRoutes,
+  adminRoutes,
+  systemsRoutes,
+  runsRoutes,
+  classroomRoutes,
+  measurementsRoutes,
+  sweepsRoutes,
+];
 
 /** All route cases of all groups. */
 export const allRoutes: readonly RouteCase[] = routeGroups.flatMap((group) => group.routes);

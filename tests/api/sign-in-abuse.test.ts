@@ -21,11 +21,17 @@ describe('sign-in under abuse', () => {
 
   it('answers a wrong password and an unknown address with the same 401, in the same time order', async () => {
     t = await createTestContext({}, { auth: { bcryptCost: 12 } });
-    await insertUser(t.ctx.db, { email: 'known@example.test', name: 'Known', passwordHash: await bcrypt.hash('the right long phrase', 12) });
+    await insertUser(t.ctx.db, {
+      email: 'known@example.test',
+      name: 'Known',
+      passwordHash: await bcrypt.hash('the right long phrase', 12),
+    });
     const client = await TestClient.create(createApp(t.ctx));
     const timed = async (email: string): Promise<{ ms: number; status: number; body: unknown }> => {
       const start = performance.now();
-      const res = await client.post('/api/auth/login').send({ email, password: 'a wrong long phrase' });
+      const res = await client
+        .post('/api/auth/login')
+        .send({ email, password: 'a wrong long phrase' });
       return { ms: performance.now() - start, status: res.status, body: res.body };
     };
     await timed('warm-up@example.test');
@@ -51,28 +57,62 @@ describe('sign-in under abuse', () => {
   });
 
   it('limits failed sign-ins per account with a 429 and Retry-After, from any address', async () => {
-    t = await createTestContext({}, { auth: { limits: { ...DEFAULT_AUTH_LIMITS, loginFailuresPerAccount: 3, loginFailuresPerIp: 100 } } });
+    t = await createTestContext(
+      {},
+      {
+        auth: {
+          limits: { ...DEFAULT_AUTH_LIMITS, loginFailuresPerAccount: 3, loginFailuresPerIp: 100 },
+        },
+      },
+    );
     const { user, password } = await createTestUser(t.ctx);
     const client = await TestClient.create(createApp(t.ctx));
     for (let i = 0; i < 3; i++) {
-      expect((await client.post('/api/auth/login').send({ email: user.email, password: 'not the password' })).status).toBe(401);
+      expect(
+        (
+          await client
+            .post('/api/auth/login')
+            .send({ email: user.email, password: 'not the password' })
+        ).status,
+      ).toBe(401);
     }
     const blocked = await client.post('/api/auth/login').send({ email: user.email, password });
     expect(blocked.status).toBe(429);
     expect(ApiErrorSchema.parse(blocked.body).error.code).toBe('RATE_LIMITED');
     expect(Number(blocked.headers['retry-after'])).toBeGreaterThan(0);
-    expect(Number(blocked.headers['retry-after'])).toBeLessThanOrEqual(DEFAULT_AUTH_LIMITS.windowMs / 1000);
+    expect(Number(blocked.headers['retry-after'])).toBeLessThanOrEqual(
+      DEFAULT_AUTH_LIMITS.windowMs / 1000,
+    );
     const otherAccount = await createTestUser(t.ctx);
-    expect((await client.post('/api/auth/login').send({ email: otherAccount.user.email, password })).status).toBe(200);
+    expect(
+      (await client.post('/api/auth/login').send({ email: otherAccount.user.email, password }))
+        .status,
+    ).toBe(200);
   });
 
   it('limits failed sign-ins per IP across accounts, and successful sign-ins do not count', async () => {
-    t = await createTestContext({}, { auth: { limits: { ...DEFAULT_AUTH_LIMITS, loginFailuresPerIp: 4, loginFailuresPerAccount: 100 } } });
+    t = await createTestContext(
+      {},
+      {
+        auth: {
+          limits: { ...DEFAULT_AUTH_LIMITS, loginFailuresPerIp: 4, loginFailuresPerAccount: 100 },
+        },
+      },
+    );
     const { user, password } = await createTestUser(t.ctx);
     const client = await TestClient.create(createApp(t.ctx));
-    for (let i = 0; i < 5; i++) expect((await client.post('/api/auth/login').send({ email: user.email, password })).status).toBe(200);
+    for (let i = 0; i < 5; i++)
+      expect(
+        (await client.post('/api/auth/login').send({ email: user.email, password })).status,
+      ).toBe(200);
     for (let i = 0; i < 4; i++) {
-      expect((await client.post('/api/auth/login').send({ email: `guess-${i}@example.test`, password: 'guessing here' })).status).toBe(401);
+      expect(
+        (
+          await client
+            .post('/api/auth/login')
+            .send({ email: `guess-${i}@example.test`, password: 'guessing here' })
+        ).status,
+      ).toBe(401);
     }
     const blocked = await client.post('/api/auth/login').send({ email: user.email, password });
     expect(blocked.status).toBe(429);
@@ -86,7 +126,9 @@ describe('sign-in under abuse', () => {
     const admin = await createTestUser(t.ctx, { role: 'admin' });
     const adminClient = await TestClient.create(app);
     await adminClient.signIn(admin.user.email);
-    expect((await adminClient.patch(`/api/admin/users/${user.id}`).send({ disabled: true })).status).toBe(200);
+    expect(
+      (await adminClient.patch(`/api/admin/users/${user.id}`).send({ disabled: true })).status,
+    ).toBe(200);
     const client = await TestClient.create(app);
     const res = await client.post('/api/auth/login').send({ email: user.email, password });
     expect(res.status).toBe(401);

@@ -32,7 +32,9 @@ async function signOut(page: Page, name: string): Promise<void> {
 }
 
 for (const account of DEMO_ACCOUNTS) {
-  test(`the demo ${account.role} signs in and sees the ${account.role}'s navigation`, async ({ page }) => {
+  test(`the demo ${account.role} signs in and sees the ${account.role}'s navigation`, async ({
+    page,
+  }) => {
     const watch = watchPage(page, ['/api/auth/me']);
     await signIn(page, account.email, DEMO_PASSWORD);
     const nav = page.getByRole('navigation', { name: 'Main' });
@@ -47,7 +49,9 @@ for (const account of DEMO_ACCOUNTS) {
   });
 }
 
-test('a new account resets its password through the Outbox link and signs in with the new one', async ({ page }) => {
+test('a new account resets its password through the Outbox link and signs in with the new one', async ({
+  page,
+}) => {
   mkdirSync(artifacts, { recursive: true });
   const email = `grower-${Date.now()}@example.test`;
   const name = 'Morgan Grower';
@@ -85,7 +89,11 @@ test('a new account resets its password through the Outbox link and signs in wit
   const link = message.getByRole('link', { name: /\/reset-password\?token=/ });
   await expect(link).toBeVisible();
   await page.mouse.move(0, 0);
-  await page.screenshot({ path: join(artifacts, 'outbox.png'), fullPage: true, animations: 'disabled' });
+  await page.screenshot({
+    path: join(artifacts, 'outbox.png'),
+    fullPage: true,
+    animations: 'disabled',
+  });
 
   // The admin reading the outbox follows the link; resetting another account keeps the admin signed in.
   await link.click();

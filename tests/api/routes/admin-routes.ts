@@ -6,7 +6,10 @@ import type { RouteGroup } from '../route-table';
 export const adminRoutes: RouteGroup = {
   name: 'admin',
   fixture: async (f) => {
-    const { user } = await createTestUser(f.ctx, { role: 'member', name: 'Subject of admin actions' });
+    const { user } = await createTestUser(f.ctx, {
+      role: 'member',
+      name: 'Subject of admin actions',
+    });
     f.params['userId'] = user.id;
   },
   routes: [

@@ -23,7 +23,11 @@ export const authRoutes: RouteGroup = {
       method: 'post',
       path: '/api/auth/register',
       access: 'public',
-      body: () => ({ name: 'New Grower', email: `new-${randomUUID()}@example.test`, password: 'siphon starts at the top' }),
+      body: () => ({
+        name: 'New Grower',
+        email: `new-${randomUUID()}@example.test`,
+        password: 'siphon starts at the top',
+      }),
       okStatus: 201,
     },
     {
@@ -35,7 +39,13 @@ export const authRoutes: RouteGroup = {
     },
     { method: 'post', path: '/api/auth/logout', access: 'signed-in', okStatus: 204 },
     { method: 'get', path: '/api/auth/me', access: 'signed-in', okStatus: 200 },
-    { method: 'patch', path: '/api/auth/me', access: 'signed-in', body: () => ({ units: 'us' }), okStatus: 200 },
+    {
+      method: 'patch',
+      path: '/api/auth/me',
+      access: 'signed-in',
+      body: () => ({ units: 'us' }),
+      okStatus: 200,
+    },
     {
       method: 'post',
       path: '/api/auth/password-reset',

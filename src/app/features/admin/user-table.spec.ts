@@ -7,8 +7,24 @@ import { UserTable } from './user-table';
 
 const settle = () => new Promise((resolve) => setTimeout(resolve));
 
-const me: AdminUser = { id: 'a1', name: 'Ada Admin', email: 'ada@example.org', role: 'admin', units: 'metric', disabled: false, createdAt: '2026-01-01T00:00:00.000Z' };
-const dana: AdminUser = { id: 'd1', name: 'Dana Demo', email: 'dana@example.org', role: 'member', units: 'metric', disabled: false, createdAt: '2026-01-02T00:00:00.000Z' };
+const me: AdminUser = {
+  id: 'a1',
+  name: 'Ada Admin',
+  email: 'ada@example.org',
+  role: 'admin',
+  units: 'metric',
+  disabled: false,
+  createdAt: '2026-01-01T00:00:00.000Z',
+};
+const dana: AdminUser = {
+  id: 'd1',
+  name: 'Dana Demo',
+  email: 'dana@example.org',
+  role: 'member',
+  units: 'metric',
+  disabled: false,
+  createdAt: '2026-01-02T00:00:00.000Z',
+};
 
 async function renderTable() {
   TestBed.configureTestingModule({
@@ -17,7 +33,9 @@ async function renderTable() {
   });
   const http = TestBed.inject(HttpTestingController);
   const ready = TestBed.inject(AuthState).ready();
-  http.expectOne('/api/auth/me').flush({ user: { id: me.id, name: me.name, email: me.email, role: me.role, units: me.units } });
+  http
+    .expectOne('/api/auth/me')
+    .flush({ user: { id: me.id, name: me.name, email: me.email, role: me.role, units: me.units } });
   await ready;
   const fixture = TestBed.createComponent(UserTable);
   http.expectOne('/api/admin/users').flush({ users: [me, dana] });
@@ -30,7 +48,10 @@ describe('UserTable', () => {
   it('lists users and locks the controls of the signed-in administrator', async () => {
     const { root } = await renderTable();
     const rows = [...root.querySelectorAll('tr.mat-mdc-row')];
-    expect(rows.map((r) => r.querySelector('td')?.textContent?.trim())).toEqual(['Ada Admin', 'Dana Demo']);
+    expect(rows.map((r) => r.querySelector('td')?.textContent?.trim())).toEqual([
+      'Ada Admin',
+      'Dana Demo',
+    ]);
     const toggles = [...root.querySelectorAll<HTMLButtonElement>('mat-slide-toggle button')];
     expect(toggles.map((t) => t.disabled)).toEqual([true, false]);
   });
@@ -44,7 +65,9 @@ describe('UserTable', () => {
     request.flush({ user: { ...dana, disabled: true } });
     await settle();
     await fixture.whenStable();
-    expect(root.querySelector('[role=status]')?.textContent).toContain('Dana Demo is disabled and signed out.');
+    expect(root.querySelector('[role=status]')?.textContent).toContain(
+      'Dana Demo is disabled and signed out.',
+    );
     expect(root.querySelectorAll('tr.disabled')).toHaveLength(1);
   });
 });

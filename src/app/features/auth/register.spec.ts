@@ -12,7 +12,11 @@ async function renderRegister() {
   });
   const fixture = TestBed.createComponent(Register);
   await fixture.whenStable();
-  return { fixture, root: fixture.nativeElement as HTMLElement, http: TestBed.inject(HttpTestingController) };
+  return {
+    fixture,
+    root: fixture.nativeElement as HTMLElement,
+    http: TestBed.inject(HttpTestingController),
+  };
 }
 
 function type(root: HTMLElement, selector: string, value: string): void {
@@ -23,9 +27,16 @@ function type(root: HTMLElement, selector: string, value: string): void {
   input.dispatchEvent(new Event('blur'));
 }
 
-const errorsOf = (root: HTMLElement) => [...root.querySelectorAll('mat-error')].map((e) => e.textContent?.trim());
+const errorsOf = (root: HTMLElement) =>
+  [...root.querySelectorAll('mat-error')].map((e) => e.textContent?.trim());
 const settle = () => new Promise((resolve) => setTimeout(resolve));
-const newUser: User = { id: 'u-9', name: 'Rowan Reed', email: 'rowan@example.org', role: 'member', units: 'metric' };
+const newUser: User = {
+  id: 'u-9',
+  name: 'Rowan Reed',
+  email: 'rowan@example.org',
+  role: 'member',
+  units: 'metric',
+};
 
 describe('Register', () => {
   it('checks the password with the shared rule before sending anything', async () => {
@@ -45,10 +56,12 @@ describe('Register', () => {
     type(root, 'input[type=email]', 'rowan@example.org');
     type(root, 'input[formcontrolname=password]', 'gravel beds drain fast');
     root.querySelector('form')?.dispatchEvent(new Event('submit'));
-    http.expectOne('/api/auth/register').flush(
-      { error: { code: 'EMAIL_TAKEN', message: 'An account already uses that e-mail address.' } },
-      { status: 409, statusText: 'Conflict' },
-    );
+    http
+      .expectOne('/api/auth/register')
+      .flush(
+        { error: { code: 'EMAIL_TAKEN', message: 'An account already uses that e-mail address.' } },
+        { status: 409, statusText: 'Conflict' },
+      );
     await settle();
     await fixture.whenStable();
     expect(errorsOf(root)).toEqual(['An account already uses that e-mail address.']);
@@ -61,10 +74,18 @@ describe('Register', () => {
     type(root, 'input[type=email]', 'marigold@example.org');
     type(root, 'input[formcontrolname=password]', 'marigold-2024-xyz');
     root.querySelector('form')?.dispatchEvent(new Event('submit'));
-    http.expectOne('/api/auth/register').flush(
-      { error: { code: 'VALIDATION_FAILED', message: '1 invalid field', fields: [{ path: 'password', message: 'Do not use your e-mail name in the password.' }] } },
-      { status: 400, statusText: 'Bad Request' },
-    );
+    http
+      .expectOne('/api/auth/register')
+      .flush(
+        {
+          error: {
+            code: 'VALIDATION_FAILED',
+            message: '1 invalid field',
+            fields: [{ path: 'password', message: 'Do not use your e-mail name in the password.' }],
+          },
+        },
+        { status: 400, statusText: 'Bad Request' },
+      );
     await settle();
     await fixture.whenStable();
     expect(errorsOf(root)).toEqual(['Do not use your e-mail name in the password.']);
@@ -78,7 +99,11 @@ describe('Register', () => {
     type(root, 'input[formcontrolname=password]', 'gravel beds drain fast');
     root.querySelector('form')?.dispatchEvent(new Event('submit'));
     const request = http.expectOne('/api/auth/register');
-    expect(request.request.body).toEqual({ name: 'Rowan Reed', email: 'rowan@example.org', password: 'gravel beds drain fast' });
+    expect(request.request.body).toEqual({
+      name: 'Rowan Reed',
+      email: 'rowan@example.org',
+      password: 'gravel beds drain fast',
+    });
     request.flush({ user: newUser }, { status: 201, statusText: 'Created' });
     await settle();
     http.expectOne('/api/auth/me').flush({ user: newUser });
