@@ -34,7 +34,7 @@ async function post(page: Page, path: string, data: object): Promise<{ id: strin
 test('a member uploads a level log, previews it, saves it and sees it over a run with aligned cycles', async ({
   page,
 }) => {
-  test.setTimeout(120_000);
+  test.setTimeout(240_000);
   mkdirSync(artifacts, { recursive: true });
   const watch = watchPage(page, ['/api/auth/me']);
   await signInAsDemoMember(page);
@@ -97,6 +97,18 @@ test('a member uploads a level log, previews it, saves it and sees it over a run
   const drain = page.locator('table.comparison tr[data-metric="drain"]');
   await expect(drain.locator('td').nth(3)).toHaveText(/^−/);
   await page.screenshot({ path: join(artifacts, 'measurements-compare.png'), fullPage: true });
+
+  // Fit k_p and the drain-loss multiplier to the log and keep them on the system.
+  await page.getByRole('link', { name: 'Back to the measurements' }).click();
+  await page.locator('tw-calibration-panel').getByText('bench-logger').click();
+  await page.getByRole('button', { name: 'Fit the model' }).click();
+  const fitted = page.locator('table.parameters tbody tr');
+  await expect(fitted).toHaveCount(2, { timeout: 90_000 });
+  await expect(fitted.first()).toContainText('Priming coefficient k_p');
+  await page.getByRole('button', { name: 'Keep these values on the system' }).click();
+  await expect(page.locator('section.current')).toContainText('bed-a: k_p', { timeout: 10_000 });
+  await expect(page.locator('section.current')).toContainText('Kept by Dana Demo');
+  await page.screenshot({ path: join(artifacts, 'measurements-calibrated.png'), fullPage: true });
   expect(watch.errors).toEqual([]);
   expect(watch.farRequests).toEqual([]);
 });

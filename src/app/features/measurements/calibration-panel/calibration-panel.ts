@@ -84,7 +84,10 @@ export class CalibrationPanel {
       sigma: figureText(r.sigma, r.unit, this.system()),
       before: figureText(r.before, r.unit, this.system()),
       after: figureText(r.after, r.unit, this.system()),
-      normalised: r.normalised === null ? '–' : r.normalised.toFixed(2),
+      normalised:
+        r.normalised === null
+          ? '–'
+          : (Math.abs(r.normalised) < 0.005 ? 0 : r.normalised).toFixed(2),
       fitted: r.fitted,
     }));
   });
