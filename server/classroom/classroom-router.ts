@@ -35,21 +35,22 @@ export function classroomRouter(
   deps: ClassroomDeps = classroomDepsFor(ctx),
 ): Router {
   const router = Router();
-  const { db } = deps;
+  mountClassRoutes(router, deps);
+  mountRosterRoutes(router, deps);
+  mountInvitationLinkRoutes(router, deps);
+  mountLessonRoutes(router, deps);
+  mountAnswerRoutes(router, deps);
+  return router;
+}
 
+/** `/classes` and `/classes/:classId`. */
+function mountClassRoutes(router: Router, { db }: ClassroomDeps): void {
   router.get('/classes', requireAuth, async (req, res) => {
     res.json(await classService.listClasses(db, currentUser(req)));
   });
   router.post('/classes', teaches, async (req, res) => {
-    res
-      .status(201)
-      .json(
-        await classService.createClass(
-          db,
-          currentUser(req),
-          parseOr400(ClassRequestSchema, req.body),
-        ),
-      );
+    const body = parseOr400(ClassRequestSchema, req.body);
+    res.status(201).json(await classService.createClass(db, currentUser(req), body));
   });
   router.get('/classes/:classId', requireAuth, async (req, res) => {
     res.json(await classService.getClass(db, currentUser(req), param(req.params.classId)));
@@ -62,79 +63,65 @@ export function classroomRouter(
     await classService.deleteClass(db, currentUser(req), param(req.params.classId));
     res.status(204).end();
   });
+}
+
+/** The roster of a class: students and invitations. */
+function mountRosterRoutes(router: Router, deps: ClassroomDeps): void {
   router.get('/classes/:classId/roster', requireAuth, async (req, res) => {
-    res.json(
-      await classService.getRoster(db, currentUser(req), param(req.params.classId), deps.now()),
-    );
+    const classId = param(req.params.classId);
+    res.json(await classService.getRoster(deps.db, currentUser(req), classId, deps.now()));
   });
   router.delete('/classes/:classId/students/:studentId', requireAuth, async (req, res) => {
-    await classService.removeStudent(
-      db,
-      currentUser(req),
-      param(req.params.classId),
-      param(req.params.studentId),
-    );
+    const { classId, studentId } = req.params;
+    await classService.removeStudent(deps.db, currentUser(req), param(classId), param(studentId));
     res.status(204).end();
   });
   router.post('/classes/:classId/invitations', requireAuth, async (req, res) => {
     const body = parseOr400(InviteRequestSchema, req.body);
+    const classId = param(req.params.classId);
     res
       .status(201)
-      .json(
-        await invitationService.inviteStudents(
-          deps,
-          currentUser(req),
-          param(req.params.classId),
-          body,
-        ),
-      );
+      .json(await invitationService.inviteStudents(deps, currentUser(req), classId, body));
   });
   router.delete('/classes/:classId/invitations/:invitationId', requireAuth, async (req, res) => {
+    const { classId, invitationId } = req.params;
     await invitationService.revokeInvitation(
       deps,
       currentUser(req),
-      param(req.params.classId),
-      param(req.params.invitationId),
+      param(classId),
+      param(invitationId),
     );
     res.status(204).end();
   });
+}
 
+/** The e-mailed invitation link: what it offers (no sign-in), and joining. */
+function mountInvitationLinkRoutes(router: Router, deps: ClassroomDeps): void {
   router.get('/invitations/:token', async (req, res) => {
     res.json(await invitationService.previewInvitation(deps, param(req.params.token)));
   });
   router.post('/invitations/:token/accept', requireAuth, async (req, res) => {
-    res.json(
-      await invitationService.acceptInvitation(deps, currentUser(req), param(req.params.token)),
-    );
+    const token = param(req.params.token);
+    res.json(await invitationService.acceptInvitation(deps, currentUser(req), token));
   });
-
-  mountLessonRoutes(router, deps);
-  return router;
 }
 
+/** The library and lessons as their owner manages them. */
 function mountLessonRoutes(router: Router, deps: ClassroomDeps): void {
   router.get('/lessons', teaches, async (req, res) => {
     res.json(await lessonService.listLibrary(deps, currentUser(req)));
   });
   router.post('/lessons', teaches, async (req, res) => {
-    res
-      .status(201)
-      .json(
-        await lessonService.createLesson(
-          deps,
-          currentUser(req),
-          parseOr400(CreateLessonRequestSchema, req.body),
-        ),
-      );
+    const body = parseOr400(CreateLessonRequestSchema, req.body);
+    res.status(201).json(await lessonService.createLesson(deps, currentUser(req), body));
   });
   router.get('/lessons/:lessonId', requireAuth, async (req, res) => {
     res.json(await lessonService.getLesson(deps, currentUser(req), param(req.params.lessonId)));
   });
   router.patch('/lessons/:lessonId', requireAuth, async (req, res) => {
     const body = parseOr400(UpdateLessonRequestSchema, req.body);
-    res.json(
-      await lessonService.updateLesson(deps, currentUser(req), param(req.params.lessonId), body),
-    );
+    const lessonId = param(req.params.lessonId);
+    res.json(await lessonService.updateLesson(deps, currentUser(req), lessonId, body));
   });
   router.delete('/lessons/:lessonId', requireAuth, async (req, res) => {
     await lessonService.deleteLesson(deps, currentUser(req), param(req.params.lessonId));
@@ -142,33 +129,24 @@ function mountLessonRoutes(router: Router, deps: ClassroomDeps): void {
   });
   router.post('/lessons/:lessonId/duplicate', requireAuth, async (req, res) => {
     const body = parseOr400(DuplicateLessonRequestSchema, req.body ?? {});
+    const lessonId = param(req.params.lessonId);
     res
       .status(201)
-      .json(
-        await lessonService.duplicateLesson(
-          deps,
-          currentUser(req),
-          param(req.params.lessonId),
-          body,
-        ),
-      );
+      .json(await lessonService.duplicateLesson(deps, currentUser(req), lessonId, body));
   });
+}
+
+/** Students' predictions and runs, and the owner's report of them. */
+function mountAnswerRoutes(router: Router, deps: ClassroomDeps): void {
   // A student's actions name the lesson assigned to them (same ids, a different part in it).
   router.put('/lessons/:assignedLessonId/answer', requireAuth, async (req, res) => {
     const body = parseOr400(AnswerRequestSchema, req.body);
-    res.json(
-      await answerService.saveAnswer(
-        deps,
-        currentUser(req),
-        param(req.params.assignedLessonId),
-        body,
-      ),
-    );
+    const lessonId = param(req.params.assignedLessonId);
+    res.json(await answerService.saveAnswer(deps, currentUser(req), lessonId, body));
   });
   router.post('/lessons/:assignedLessonId/run', requireAuth, async (req, res) => {
-    res.json(
-      await answerService.runLesson(deps, currentUser(req), param(req.params.assignedLessonId)),
-    );
+    const lessonId = param(req.params.assignedLessonId);
+    res.json(await answerService.runLesson(deps, currentUser(req), lessonId));
   });
   router.get('/lessons/:lessonId/report', requireAuth, async (req, res) => {
     res.json(await answerService.getReport(deps, currentUser(req), param(req.params.lessonId)));

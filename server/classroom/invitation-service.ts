@@ -45,46 +45,61 @@ export async function inviteStudents(
   const alreadyMembers = emails.filter((e) => members.has(e) || e === user.email.toLowerCase());
   const invited: Invitation[] = [];
   for (const email of emails.filter((e) => !alreadyMembers.includes(e))) {
-    const { token, tokenHash } = newInvitationToken();
-    const expiresAt = new Date(deps.now().getTime() + INVITATION_VALID_DAYS * DAY_MS);
-    const row = await invitations.replaceInvitation(deps.db, {
+    const sent = await sendInvitation(deps, {
       classId,
+      className: found.row.name,
       email,
-      tokenHash,
-      expiresAt,
+      instructorName: user.name,
     });
-    const link = `${deps.publicUrl}/join/${token}`;
-    try {
-      await deps.mailer.send(
-        invitationMail({
-          to: email,
-          instructorName: user.name,
-          className: found.row.name,
-          link,
-          validDays: INVITATION_VALID_DAYS,
-        }),
-      );
-    } catch {
-      await invitations.deleteInvitation(deps.db, classId, row.id);
-      const sent =
+    if (!sent) {
+      const earlier =
         invited.length > 0
           ? ` Invitations to ${invited.map((i) => i.email).join(', ')} were sent.`
           : '';
-      throw new HttpError(
-        502,
-        'MAIL_FAILED',
-        `The mail server refused the invitation to ${email}; check the address and try again.${sent}`,
-      );
+      const message = `The mail server refused the invitation to ${email}; check the address and try again.${earlier}`;
+      throw new HttpError(502, 'MAIL_FAILED', message);
     }
-    invited.push({
-      id: row.id,
-      email,
-      status: 'open',
-      createdAt: row.createdAt.toISOString(),
-      expiresAt: row.expiresAt.toISOString(),
-    });
+    invited.push(sent);
   }
   return { invited, alreadyMembers };
+}
+
+/** Stores a fresh invitation and e-mails its link; undefined (and nothing stored) when the mail fails. */
+async function sendInvitation(
+  deps: ClassroomDeps,
+  to: { classId: string; className: string; email: string; instructorName: string },
+): Promise<Invitation | undefined> {
+  const { token, tokenHash } = newInvitationToken();
+  const expiresAt = new Date(deps.now().getTime() + INVITATION_VALID_DAYS * DAY_MS);
+  const row = await invitations.replaceInvitation(deps.db, {
+    classId: to.classId,
+    email: to.email,
+    tokenHash,
+    expiresAt,
+  });
+  const link = `${deps.publicUrl}/join/${token}`;
+  try {
+    await deps.mailer.send(
+      invitationMail({
+        to: to.email,
+        instructorName: to.instructorName,
+        className: to.className,
+        link,
+        validDays: INVITATION_VALID_DAYS,
+      }),
+    );
+  } catch {
+    await invitations.deleteInvitation(deps.db, to.classId, row.id);
+    return undefined;
+  }
+  const { createdAt } = row;
+  return {
+    id: row.id,
+    email: to.email,
+    status: 'open',
+    createdAt: createdAt.toISOString(),
+    expiresAt: expiresAt.toISOString(),
+  };
 }
 
 /** Withdraws an invitation not yet accepted (the class's instructor only). */

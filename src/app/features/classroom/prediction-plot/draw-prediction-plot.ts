@@ -28,6 +28,8 @@ const RADIUS = 6;
 const STEP = RADIUS * 2 + 2;
 const ROW_HEIGHT = 30;
 const CHOICE_LABEL_WIDTH = 340;
+/** Numbers on the plot: as short as they are exact ("8", "7.9"). */
+const FORMAT = d3.format('~g');
 
 /** Draws the dot plot into `svg` (replacing what was there) and sets its viewBox. */
 export function drawPredictionPlot(svg: SVGSVGElement, data: PredictionPlotData): void {
@@ -42,41 +44,72 @@ function dotClass(dot: PlotDot, showAnswer: boolean): string {
   return dot.correct ? 'dot right' : 'dot wrong';
 }
 
-function drawNumbers(
-  root: d3.Selection<SVGSVGElement, unknown, null, undefined>,
-  data: PredictionPlotData,
-): void {
-  const numbers = data.dots.map((d) => Number(d.value));
+type Root = d3.Selection<SVGSVGElement, unknown, null, undefined>;
+
+/** Where the number plot puts things: the value scale, each dot's stack level, the axis line. */
+interface NumberLayout {
+  x: d3.ScaleLinear<number, number>;
+  placed: { dot: PlotDot; cx: number; level: number }[];
+  baseline: number;
+  height: number;
+  simulated: number | null;
+}
+
+/** The value scale from 0 (or below) to past the largest value; dots at one place stack upwards. */
+function layoutNumbers(data: PredictionPlotData): NumberLayout {
   const simulated = typeof data.simulated === 'number' && data.showAnswer ? data.simulated : null;
-  const extent = d3.extent([
-    ...numbers,
+  const shown = [
+    ...data.dots.map((d) => Number(d.value)),
     ...(simulated === null ? [] : [simulated]),
     ...(data.showAnswer && data.band ? data.band : []),
-  ]);
-  const low = Math.min(0, extent[0] ?? 0);
-  const high = (extent[1] ?? 1) * 1.1 || 1;
+  ];
+  const extent = d3.extent(shown);
+  const domain = [Math.min(0, extent[0] ?? 0), (extent[1] ?? 1) * 1.1 || 1];
   const x = d3
     .scaleLinear()
-    .domain([low, high])
+    .domain(domain)
     .nice()
     .range([MARGIN.left, WIDTH - MARGIN.right]);
   const stacks = new Map<number, number>();
   const placed = data.dots.map((dot) => {
-    const bin = Math.round(x(Number(dot.value)) / STEP);
+    const cx = x(Number(dot.value));
+    const bin = Math.round(cx / STEP);
     const level = stacks.get(bin) ?? 0;
     stacks.set(bin, level + 1);
-    return { dot, cx: x(Number(dot.value)), level };
+    return { dot, cx, level };
   });
-  const tallest = Math.max(3, ...stacks.values());
-  const baseline = MARGIN.top + tallest * STEP + 8;
-  const height = baseline + MARGIN.bottom;
-  root.attr('viewBox', `0 0 ${WIDTH} ${height}`);
-  if (data.showAnswer && data.band && simulated !== null) {
+  const baseline = MARGIN.top + Math.max(3, ...stacks.values()) * STEP + 8;
+  return { x, placed, baseline, height: baseline + MARGIN.bottom, simulated };
+}
+
+function drawNumbers(root: Root, data: PredictionPlotData): void {
+  const layout = layoutNumbers(data);
+  root.attr('viewBox', `0 0 ${WIDTH} ${layout.height}`);
+  drawBandAndAxis(root, data, layout);
+  root
+    .append('g')
+    .selectAll('circle')
+    .data(layout.placed)
+    .join('circle')
+    .attr('class', (p) => dotClass(p.dot, data.showAnswer))
+    .attr('r', RADIUS)
+    .attr('cx', (p) => p.cx)
+    .attr('cy', (p) => layout.baseline - RADIUS - 2 - p.level * STEP)
+    .append('title')
+    .text((p) => `${p.dot.name}: ${FORMAT(Number(p.dot.value))} ${data.unitLabel}`);
+  if (layout.simulated !== null) drawSimulated(root, data, layout, layout.simulated);
+}
+
+/** The band that counts as right (once the answer shows), the value axis and its unit. */
+function drawBandAndAxis(root: Root, data: PredictionPlotData, layout: NumberLayout): void {
+  const { x, baseline } = layout;
+  if (data.band && layout.simulated !== null) {
+    const [from, to] = data.band;
     root
       .append('rect')
       .attr('class', 'band')
-      .attr('x', x(data.band[0]))
-      .attr('width', Math.max(1, x(data.band[1]) - x(data.band[0])))
+      .attr('x', x(from))
+      .attr('width', Math.max(1, x(to) - x(from)))
       .attr('y', MARGIN.top)
       .attr('height', baseline - MARGIN.top);
   }
@@ -88,47 +121,41 @@ function drawNumbers(
       d3
         .axisBottom(x)
         .ticks(8)
-        .tickFormat((v) => `${d3.format('~g')(Number(v))}`),
+        .tickFormat((v) => FORMAT(Number(v))),
     );
   root
     .append('text')
     .attr('class', 'axis-title')
     .attr('x', WIDTH - MARGIN.right)
-    .attr('y', height - 4)
+    .attr('y', layout.height - 4)
     .attr('text-anchor', 'end')
     .text(data.unitLabel);
-  root
-    .append('g')
-    .selectAll('circle')
-    .data(placed)
-    .join('circle')
-    .attr('class', (p) => dotClass(p.dot, data.showAnswer))
-    .attr('r', RADIUS)
-    .attr('cx', (p) => p.cx)
-    .attr('cy', (p) => baseline - RADIUS - 2 - p.level * STEP)
-    .append('title')
-    .text((p) => `${p.dot.name}: ${d3.format('~g')(Number(p.dot.value))} ${data.unitLabel}`);
-  if (simulated !== null) {
-    root
-      .append('line')
-      .attr('class', 'simulated')
-      .attr('x1', x(simulated))
-      .attr('x2', x(simulated))
-      .attr('y1', MARGIN.top - 4)
-      .attr('y2', baseline);
-    root
-      .append('text')
-      .attr('class', 'simulated-label')
-      .attr('x', x(simulated) + 4)
-      .attr('y', MARGIN.top + 6)
-      .text(`simulated ${d3.format('~g')(Number(simulated.toPrecision(3)))} ${data.unitLabel}`);
-  }
 }
 
-function drawChoices(
-  root: d3.Selection<SVGSVGElement, unknown, null, undefined>,
+/** The simulated value as a line across the dots, labelled. */
+function drawSimulated(
+  root: Root,
   data: PredictionPlotData,
+  layout: NumberLayout,
+  value: number,
 ): void {
+  const at = layout.x(value);
+  root
+    .append('line')
+    .attr('class', 'simulated')
+    .attr('x1', at)
+    .attr('x2', at)
+    .attr('y1', MARGIN.top - 4)
+    .attr('y2', layout.baseline);
+  root
+    .append('text')
+    .attr('class', 'simulated-label')
+    .attr('x', at + 4)
+    .attr('y', MARGIN.top + 6)
+    .text(`simulated ${FORMAT(Number(value.toPrecision(3)))} ${data.unitLabel}`);
+}
+
+function drawChoices(root: Root, data: PredictionPlotData): void {
   const height = MARGIN.top + data.choices.length * ROW_HEIGHT + 8;
   root.attr('viewBox', `0 0 ${WIDTH} ${height}`);
   data.choices.forEach((choice, row) => {
