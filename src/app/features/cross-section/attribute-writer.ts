@@ -3,7 +3,7 @@
  * that moves nothing touches nothing (an unchanged write can still invalidate style in a browser).
  */
 export class AttributeWriter {
-  private readonly written = new Map<Element, Map<string, string>>();
+  private written = new WeakMap<Element, Map<string, string>>();
 
   /** Sets attribute `name` of `element` to `value` unless it already has it. */
   attr(element: Element, name: string, value: string): void {
@@ -22,7 +22,7 @@ export class AttributeWriter {
 
   /** Forgets every element (after a redraw replaced them). */
   clear(): void {
-    this.written.clear();
+    this.written = new WeakMap();
   }
 
   private remember(element: Element, key: string, value: string): boolean {

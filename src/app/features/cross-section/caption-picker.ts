@@ -9,6 +9,8 @@ export interface Caption {
   readonly key: number;
   readonly timeS: number;
   readonly text: string;
+  /** Where the last event of the instant happened (a vessel, bed or pump id). */
+  readonly where: string;
 }
 
 /**
@@ -18,6 +20,7 @@ export interface Caption {
 export class CaptionPicker {
   private readonly instants: number[] = [];
   private readonly texts: string[] = [];
+  private readonly places: string[] = [];
 
   /** `events` in time order. */
   constructor(events: readonly CrossSectionEvent[], system: UnitSystem) {
@@ -26,9 +29,11 @@ export class CaptionPicker {
       const last = this.instants.length - 1;
       if (last >= 0 && this.instants[last] === event.t_s) {
         this.texts[last] = `${this.texts[last]}; ${text}`;
+        this.places[last] = event.where;
       } else {
         this.instants.push(event.t_s);
         this.texts.push(text);
+        this.places.push(event.where);
       }
     }
   }
@@ -43,6 +48,6 @@ export class CaptionPicker {
     const key = lastAtOrBefore(this.instants, timeS);
     const instant = this.instants[key];
     if (key < 0 || instant === undefined || timeS - instant > maxAgeS) return null;
-    return { key, timeS: instant, text: this.texts[key] ?? '' };
+    return { key, timeS: instant, text: this.texts[key] ?? '', where: this.places[key] ?? '' };
   }
 }

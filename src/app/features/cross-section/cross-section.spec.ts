@@ -87,7 +87,7 @@ describe('CrossSection', () => {
     if (bed?.kind !== 'bed' || bed.shape.type !== 'box') throw new Error('bed-north changed shape');
     const media = box(root, 'g.vessel[data-id="bed-north"] rect.media');
     const pxPerM = media.width / bed.shape.length;
-    const standpipe = box(root, 'rect.standpipe[data-id="bed-north"]');
+    const standpipe = box(root, 'svg.drawing rect.standpipe[data-id="bed-north"]');
     expect(standpipe.height).toBeCloseTo(bed.drain.standpipe.height * pxPerM, 6);
     expect(standpipe.width).toBeCloseTo(bed.drain.standpipe.outerDiameter * pxPerM, 6);
     // Standpipe and media both stand on the bed floor.
@@ -97,7 +97,9 @@ describe('CrossSection', () => {
     await fixture.whenStable();
     const media2 = box(root, 'g.vessel[data-id="bed-north"] rect.media');
     const across = media2.width / bed.shape.length;
-    const up = box(root, 'rect.standpipe[data-id="bed-north"]').height / bed.drain.standpipe.height;
+    const up =
+      box(root, 'svg.drawing rect.standpipe[data-id="bed-north"]').height /
+      bed.drain.standpipe.height;
     expect(up / across).toBeCloseTo(2, 9);
   });
 
@@ -119,9 +121,9 @@ describe('CrossSection', () => {
   it('labels each bed with the phase its phase channel holds, and the spill number while spilling', async () => {
     const { fixture, root } = await render();
     const tag = (bed: string) =>
-      root.querySelector(`g.bed-parts[data-id="${bed}"] tspan.phase`)?.textContent;
+      root.querySelector(`svg.drawing g.bed-parts[data-id="${bed}"] tspan.phase`)?.textContent;
     const spill = (bed: string) =>
-      root.querySelector(`g.bed-parts[data-id="${bed}"] tspan.spill`)?.textContent;
+      root.querySelector(`svg.drawing g.bed-parts[data-id="${bed}"] tspan.spill`)?.textContent;
     for (const [code, word] of [
       [0, 'filling'],
       [1, 'spilling'],
@@ -133,6 +135,34 @@ describe('CrossSection', () => {
       expect(root.querySelector('li[data-id="bed-south"] .phase')?.textContent?.trim()).toBe(word);
       if (code === 1) expect(spill('bed-south')).toMatch(/^spill number 0\.\d\d \/ 0\.\d\d$/);
       else expect(spill('bed-south')).toBe('');
+    }
+  });
+
+  it('draws the water inside the bell: level with the bed while filling, up to the cap while siphoning', async () => {
+    const { fixture, root } = await render();
+    const bed = scenario.vessels.find((v) => v.id === 'bed-north');
+    if (bed?.kind !== 'bed' || bed.drain.type !== 'bell-siphon') throw new Error('no bell');
+    const closeUp = 'svg.close-up g.bed-parts[data-id="bed-north"]';
+    const level = series.channels.find((c) => c.id === 'level:bed-north');
+    for (const code of [0, 3]) {
+      const t = timeWithPhase('bed-north', code);
+      fixture.componentRef.setInput('cursorS', t);
+      await fixture.whenStable();
+      const k = box(root, `${closeUp} rect.standpipe`).width / bed.drain.standpipe.outerDiameter;
+      const inside = box(root, `${closeUp} rect.bell-water`).height / k;
+      const i = series.t_s.findIndex((time) => time > t) - 1;
+      const t0 = series.t_s[i] ?? 0;
+      const t1 = series.t_s[i + 1] ?? 0;
+      const h0 = level?.values[i] ?? 0;
+      const h1 = level?.values[i + 1] ?? 0;
+      const bedLevel = h0 + ((h1 - h0) * (t - t0)) / (t1 - t0);
+      const expected = code === 3 ? bed.drain.standpipe.height + bed.drain.bell.capGap : bedLevel;
+      expect(inside).toBeCloseTo(expected, 3);
+      // Above the water the bell holds air: the air space spans the whole bell.
+      expect(box(root, `${closeUp} rect.bell-air`).height / k).toBeCloseTo(
+        bed.drain.standpipe.height + bed.drain.bell.capGap,
+        6,
+      );
     }
   });
 
@@ -153,7 +183,8 @@ describe('CrossSection', () => {
       `${primed.where} primed at ${minutes}:${seconds} — spill flow reached ${flow}`,
     );
     expect(
-      root.querySelector(`g.bed-parts[data-id="${primed.where}"] tspan.phase`)?.textContent,
+      root.querySelector(`svg.drawing g.bed-parts[data-id="${primed.where}"] tspan.phase`)
+        ?.textContent,
     ).toBe('priming');
     press(root, 'ArrowLeft');
     await fixture.whenStable();

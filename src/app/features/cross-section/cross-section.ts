@@ -27,7 +27,8 @@ import { buildCrossSectionScene } from './cross-section-scene';
 import { drawScene } from './draw-scene';
 import { ExplainPanel } from './explain-panel';
 import { FrameTimer } from './frame-timer';
-import { paintScene } from './paint-scene';
+import { type CloseUpHandles, CLOSE_UP_SIZE, drawCloseUp } from './draw-close-up';
+import { paintCloseUp, paintScene } from './paint-scene';
 import { explainPhase } from './phase-explanation';
 import { PlaybackBar } from './playback-bar';
 import { BROWSER_FRAMES, type FrameScheduler, PlaybackController } from './playback-controller';
@@ -100,9 +101,12 @@ export class CrossSection {
   );
   protected readonly presenting = this.screen.presenting;
   private readonly svgLayer = viewChild.required<ElementRef<SVGGElement>>('layer');
+  private readonly closeUpLayer = viewChild.required<ElementRef<SVGGElement>>('closeUpLayer');
+  protected readonly closeUpViewBox = `0 0 ${CLOSE_UP_SIZE.width} ${CLOSE_UP_SIZE.height}`;
   private readonly writer = new AttributeWriter();
   private readonly timer = new FrameTimer();
   private handles: SceneHandles | null = null;
+  private closeUp: CloseUpHandles | null = null;
   private offsets = new Float64Array(0);
   private captionShownAtMs = 0;
   private lastEmittedS: number | null = null;
@@ -140,13 +144,15 @@ export class CrossSection {
   protected readonly presentLabel = computed(() =>
     this.presenting() ? 'Leave presentation' : 'Present',
   );
-  protected readonly explainedBedId = computed(
-    () => this.explainBedId() ?? this.scene().beds[0]?.id ?? '',
-  );
+  /** The bed the reader picked, else the bed of the latest caption, else the first bed. */
+  protected readonly explainedBedId = computed(() => {
+    const beds = this.scene().beds;
+    const captioned = beds.find((b) => b.id === this.caption()?.where)?.id;
+    return this.explainBedId() ?? captioned ?? beds[0]?.id ?? '';
+  });
   protected readonly bedIds = computed(() => this.scene().beds.map((b) => b.id));
   protected readonly explanation = computed(() => {
-    const scene = this.scene();
-    const bed = scene.beds.find((b) => b.id === this.explainBedId()) ?? scene.beds[0];
+    const bed = this.scene().beds.find((b) => b.id === this.explainedBedId());
     const reading = this.readouts().beds.find((b) => b.id === bed?.id)?.reading;
     if (!bed || !reading) return null;
     const timeS = this.playback.coarseTimeS();
@@ -160,6 +166,10 @@ export class CrossSection {
       system: this.system(),
     });
   });
+  protected readonly closeUpLabel = computed(
+    () =>
+      `Close-up, to scale, of the bell of ${this.explainedBedId()}: the water and air inside the bell and the standpipe.`,
+  );
   protected readonly title = computed(() => `Cross-section of ${this.scenario().name}`);
   protected readonly description = computed(() => {
     const scene = this.scene();
@@ -171,6 +181,7 @@ export class CrossSection {
 
   constructor() {
     effect(() => this.redraw());
+    effect(() => this.redrawCloseUp());
     effect(() => {
       const reader = this.sampler().reader;
       untracked(() => this.playback.setRange(reader.startS, reader.endS));
@@ -282,13 +293,41 @@ export class CrossSection {
     });
   }
 
+  /** Draws the close-up of the explained bed's bell again (another bed, scene or scale). */
+  private redrawCloseUp(): void {
+    const layer = this.closeUpLayer().nativeElement;
+    const scene = this.scene();
+    const bedIndex = scene.beds.findIndex((b) => b.id === this.explainedBedId());
+    const bed = scene.beds[bedIndex];
+    this.frame();
+    untracked(() => {
+      if (!bed) {
+        layer.replaceChildren();
+        this.closeUp = null;
+        return;
+      }
+      const vesselIndex = scene.vessels.findIndex((v) => v.id === bed.id);
+      const media = bed.media.type === 'expanded-clay' ? 'clay' : 'gravel';
+      this.closeUp = drawCloseUp(
+        layer,
+        bed,
+        bedIndex,
+        vesselIndex,
+        `${this.id}-air`,
+        `${this.id}-${media}`,
+      );
+      this.drawFrame(this.playback.time, 0);
+    });
+  }
+
   /** One animation frame: sample the run at `timeS` and move what changed. */
   private drawFrame(timeS: number, wallStepS: number): void {
     const handles = this.handles;
     if (!handles) return;
     const started = this.timer.start();
     const sampler = untracked(() => this.sampler());
-    paintScene(handles, sampler.sample(timeS), {
+    const state = sampler.sample(timeS);
+    const context = {
       frame: untracked(() => this.frame()),
       writer: this.writer,
       busiestM3PerS: sampler.busiestM3PerS,
@@ -296,7 +335,9 @@ export class CrossSection {
       offsets: this.offsets,
       primingCoefficients: untracked(() => this.primingCoefficients()),
       speed: untracked(() => this.playback.speed()),
-    });
+    };
+    paintScene(handles, state, context);
+    if (this.closeUp) paintCloseUp(this.closeUp, state, context);
     this.updateCaption(timeS, wallStepS === 0);
     this.timer.stop(started);
   }

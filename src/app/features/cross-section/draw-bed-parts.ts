@@ -2,7 +2,7 @@ import type * as d3 from 'd3';
 import type { SceneBed } from './cross-section-scene';
 import type { SceneFrame } from './scene-frame';
 import type { BedHandles } from './scene-handles';
-import { PAINT } from './scene-palette';
+import { PAINT, textSize } from './scene-palette';
 
 /** Distance of the phase tag below the bed floor, user units. */
 const TAG_OFFSET_PX = 16;
@@ -88,7 +88,7 @@ export function drawBedParts(
     .attr('y', z(0) + TAG_OFFSET_PX)
     .attr('text-anchor', 'middle')
     .style('fill', PAINT.wall)
-    .style('font-size', '13px')
+    .style('font-size', textSize(13))
     .style('paint-order', 'stroke')
     .style('stroke', PAINT.halo)
     .style('stroke-width', 4)
@@ -102,8 +102,8 @@ export function drawBedParts(
     .append('tspan')
     .attr('class', 'spill num')
     .attr('x', x(0))
-    .attr('dy', 15)
-    .style('font-size', '11px')
+    .attr('dy', '1.25em')
+    .style('font-size', textSize(11))
     .node() as SVGTSpanElement;
   return { bed, vesselIndex, bellWater, boreWater, phaseText, spillText };
 }

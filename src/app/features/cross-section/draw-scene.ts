@@ -3,7 +3,7 @@ import { type DisplayScale, toDisplayValue } from '../../ui/time-series-chart/di
 import { ELEVATION_MARGIN, ELEVATION_WIDTH } from '../systems/elevation-drawing/draw-elevation';
 import type { CrossSectionScene, ScenePipe } from './cross-section-scene';
 import { drawBedParts } from './draw-bed-parts';
-import { PAINT } from './scene-palette';
+import { PAINT, textSize } from './scene-palette';
 import type { PipeHandles, PumpHandles, SceneHandles } from './scene-handles';
 import type { SceneFrame } from './scene-frame';
 
@@ -101,7 +101,7 @@ export function drawScene(layer: SVGGElement, drawing: SceneDrawing): SceneHandl
     .attr('y', 18)
     .attr('text-anchor', 'end')
     .style('fill', PAINT.wall)
-    .style('font-size', '15px')
+    .style('font-size', textSize(15))
     .node() as SVGTextElement;
   return { water, beds, pipes, pumps, clock };
 }
@@ -172,7 +172,7 @@ function drawAxis(root: Root, { frame, units }: SceneDrawing): void {
     .attr('x', 4)
     .attr('y', 14)
     .style('fill', PAINT.wall)
-    .style('font-size', '11px')
+    .style('font-size', textSize(11))
     .text(`elevation (${units.label})`);
 }
 
@@ -248,7 +248,7 @@ function drawPump(root: Root, pump: PumpHandles['pump'], frame: SceneFrame): Pum
     .attr('x', x + size + 4)
     .attr('y', y + size / 2 + 4)
     .style('fill', PAINT.wall)
-    .style('font-size', '12px')
+    .style('font-size', textSize(12))
     .style('font-weight', 600)
     .style('paint-order', 'stroke')
     .style('stroke', PAINT.halo)
@@ -267,6 +267,6 @@ function drawNames(root: Root, { scene, frame }: SceneDrawing): void {
     .attr('y', (v) => frame.py(v.floorM + v.heightM) - 6)
     .attr('text-anchor', 'middle')
     .style('fill', PAINT.wall)
-    .style('font-size', '12px')
+    .style('font-size', textSize(12))
     .text((v) => v.id);
 }

@@ -63,6 +63,7 @@ describe('CaptionPicker', () => {
       key: 1,
       timeS: 724.4,
       text: eventCaption(primed, 'metric'),
+      where: 'bed-north',
     });
   });
 });

@@ -1,5 +1,6 @@
 import type { AttributeWriter } from './attribute-writer';
 import { BREAK_SHOWN_S, type BedPhaseReading, PRIMING_SHOWN_S } from './bed-phase';
+import type { CloseUpHandles } from './draw-close-up';
 import { formatClock } from './format-clock';
 import { PHASE_WORDS } from './phase-words';
 import type { SceneFrame } from './scene-frame';
@@ -40,17 +41,7 @@ export function paintScene(handles: SceneHandles, state: SceneState, context: Pa
     writer.attr(rect, 'y', frame.py(vessel.floorM + level).toFixed(2));
     writer.attr(rect, 'height', (level * frame.pzPerM).toFixed(2));
   });
-  handles.beds.forEach((bed, i) => {
-    const reading = state.phases[i] ?? { phase: 'filling', sinceS: Infinity };
-    paintBed(bed, reading, state.levelsM[bed.vesselIndex] || 0, context);
-    const spill = state.spillNumbers[i] ?? Number.NaN;
-    const kp = context.primingCoefficients[i] ?? Number.NaN;
-    writer.text(bed.phaseText, PHASE_WORDS[reading.phase].label);
-    writer.text(
-      bed.spillText,
-      Number.isFinite(spill) ? `spill number ${spill.toFixed(2)} / ${kp.toFixed(2)}` : '',
-    );
-  });
+  handles.beds.forEach((bed, i) => paintBedState(bed, state, i, context));
   handles.pipes.forEach((pipe, i) => paintPipe(pipe, state, i, context));
   handles.pumps.forEach(({ body, state: text }, i) => {
     const pumpState = state.pumps[i] ?? 'off';
@@ -64,6 +55,24 @@ export function paintScene(handles: SceneHandles, state: SceneState, context: Pa
     );
   });
   writer.text(handles.clock, `${formatClock(state.timeS, true)} · ${context.speed}×`);
+}
+
+/** One bed's drain parts and tag (phase, and the spill number against k_p while spilling). */
+export function paintBedState(
+  bed: BedHandles,
+  state: SceneState,
+  bedIndex: number,
+  context: PaintContext,
+): void {
+  const reading = state.phases[bedIndex] ?? { phase: 'filling', sinceS: Infinity };
+  paintBed(bed, reading, state.levelsM[bed.vesselIndex] || 0, context);
+  const spill = state.spillNumbers[bedIndex] ?? Number.NaN;
+  const kp = context.primingCoefficients[bedIndex] ?? Number.NaN;
+  context.writer.text(bed.phaseText, PHASE_WORDS[reading.phase].label);
+  context.writer.text(
+    bed.spillText,
+    Number.isFinite(spill) ? `spill number ${spill.toFixed(2)} / ${kp.toFixed(2)}` : '',
+  );
 }
 
 /** Water inside the bell and the standpipe bore for the bed's phase. */
@@ -142,4 +151,18 @@ export function drainFullness(reading: BedPhaseReading): number {
   if (reading.phase === 'priming') return Math.min(1, reading.sinceS / PRIMING_SHOWN_S);
   if (reading.phase === 'break') return 1 - Math.min(1, reading.sinceS / BREAK_SHOWN_S);
   return 0;
+}
+
+/** The close-up of one bed: the water around the bell, and the bell and standpipe as in the scene. */
+export function paintCloseUp(
+  closeUp: CloseUpHandles,
+  state: SceneState,
+  context: PaintContext,
+): void {
+  const { frame } = closeUp;
+  const bed = closeUp.bed.bed;
+  const level = Math.min(bed.heightM, Math.max(0, state.levelsM[closeUp.bed.vesselIndex] || 0));
+  context.writer.attr(closeUp.water, 'y', frame.py(bed.floorM + level).toFixed(2));
+  context.writer.attr(closeUp.water, 'height', (level * frame.pzPerM).toFixed(2));
+  paintBedState(closeUp.bed, state, closeUp.bedIndex, { ...context, frame });
 }

@@ -16,3 +16,8 @@ export const PAINT = {
   pumpOff: 'var(--xs-pump-off)',
   pumpDry: 'var(--xs-pump-dry)',
 } as const;
+
+/** A text size in user units, scaled by `--xs-text-scale` (larger in presentation mode). */
+export function textSize(px: number): string {
+  return `calc(${px}px * var(--xs-text-scale, 1))`;
+}
