@@ -142,6 +142,14 @@ describe('CrossSection', () => {
     const { fixture, root } = await render();
     const bed = scenario.vessels.find((v) => v.id === 'bed-north');
     if (bed?.kind !== 'bed' || bed.drain.type !== 'bell-siphon') throw new Error('no bell');
+    // The close-up shows the bed the explain panel explains: pick bed-north there.
+    press(root, 'e');
+    await fixture.whenStable();
+    const picker = root.querySelector<HTMLSelectElement>('tw-explain-panel select');
+    if (!picker) throw new Error('The explain panel has no bed picker.');
+    picker.value = 'bed-north';
+    picker.dispatchEvent(new Event('change'));
+    await fixture.whenStable();
     const closeUp = 'svg.close-up g.bed-parts[data-id="bed-north"]';
     const level = series.channels.find((c) => c.id === 'level:bed-north');
     for (const code of [0, 3]) {
