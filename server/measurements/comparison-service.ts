@@ -1,8 +1,11 @@
 /** `GET /api/measurements/:mid/compare?run=`: a measurement against a run of the same system, ready to overlay. */
+
 import {
   StopwatchEntrySchema,
   type CycleFigures,
+  type MeasuredSeries,
   type MeasurementComparison,
+  type StopwatchEntry,
 } from '../../shared/contracts/measurements';
 import type { User } from '../../shared/contracts/auth';
 import type { Database } from '../db/database';
@@ -13,6 +16,7 @@ import { decodeSeries, type DecodedSeries } from '../runs/series-codec';
 import { cycleFigures, figuresFromSpreads, type DrainCycle } from './cycle-figures';
 import { compareFigures } from './compare-figures';
 import { detectLevelCycles } from './detect-level-cycles';
+import type { MeasurementHead } from './measurements-repository';
 import { loadMeasuredSeries, requireMeasurement } from './measurements-service';
 import { simulatedDrainCycles, type CycleEvent } from './simulated-drain-cycles';
 import { stopwatchSpreads } from './stopwatch-spreads';
@@ -57,6 +61,36 @@ function steady(cycles: DrainCycle[]): DrainCycle[] {
   return cycles.length >= 3 ? cycles.slice(1) : cycles;
 }
 
+/** The measured side: a CSV's series per vessel, or a stopwatch log's entries. */
+interface MeasuredSide {
+  series: MeasuredSeries | null;
+  entries: StopwatchEntry[];
+  beds: string[];
+}
+
+async function measuredSide(db: Database, head: MeasurementHead): Promise<MeasuredSide> {
+  if (head.kind === 'stopwatch') {
+    const entries = StopwatchEntrySchema.array().parse(head.stopwatch);
+    return { series: null, entries, beds: [...new Set(entries.map((e) => e.bed))] };
+  }
+  const series = await loadMeasuredSeries(db, head.id);
+  return { series, entries: [], beds: series.beds.map((b) => b.bed) };
+}
+
+/** The vessel to compare: the asked one, else the first measured one the run simulated; 400 otherwise. */
+function chooseVessel(side: MeasuredSide, series: DecodedSeries, asked: string | undefined) {
+  const simulatedBeds = side.beds.filter((b) => series.channels.some((c) => c.id === `level:${b}`));
+  const bed = asked ?? simulatedBeds[0] ?? side.beds[0];
+  const channel = series.channels.find((c) => c.id === `level:${bed}`);
+  if (!bed || !channel || !side.beds.includes(bed)) {
+    throw badRequest(
+      `Choose a vessel that is both measured and simulated: ${simulatedBeds.join(', ') || 'none'}.`,
+      [{ path: 'bed', message: 'Not measured or not in this run.' }],
+    );
+  }
+  return { bed, channel, simulatedBeds };
+}
+
 /** Compares and aligns; see the contract's `MeasurementComparisonSchema`. */
 export async function compareMeasurement(
   db: Database,
@@ -66,37 +100,27 @@ export async function compareMeasurement(
 ): Promise<MeasurementComparison> {
   const { head, system } = await requireMeasurement(db, user, measurementId, 'read');
   const run = await requireRun(db, user, query.run, 'read');
-  if (run.systemId !== head.systemId)
+  if (run.systemId !== head.systemId) {
     throw badRequest('Compare with a run of the same system.', [
       { path: 'run', message: 'A run of another system.' },
     ]);
-  const series = await runSeriesOrThrow(db, run.id);
-  const measured = head.kind === 'stopwatch' ? null : await loadMeasuredSeries(db, measurementId);
-  const entries =
-    head.kind === 'stopwatch' ? StopwatchEntrySchema.array().parse(head.stopwatch) : [];
-  const beds = measured ? measured.beds.map((b) => b.bed) : [...new Set(entries.map((e) => e.bed))];
-  const simulatedBeds = beds.filter((b) => series.channels.some((c) => c.id === `level:${b}`));
-  const bed = query.bed ?? simulatedBeds[0] ?? beds[0];
-  const channel = series.channels.find((c) => c.id === `level:${bed}`);
-  if (!bed || !channel || !beds.includes(bed)) {
-    throw badRequest(
-      `Choose a vessel that is both measured and simulated: ${simulatedBeds.join(', ') || 'none'}.`,
-      [{ path: 'bed', message: 'Not measured or not in this run.' }],
-    );
   }
+  const series = await runSeriesOrThrow(db, run.id);
+  const side = await measuredSide(db, head);
+  const { bed, channel, simulatedBeds } = chooseVessel(side, series, query.bed);
   const events = (Array.isArray(run.events) ? run.events : []) as CycleEvent[];
   const simCycles = steady(
     simulatedDrainCycles(events, bed, interpolator(series.t_s, channel.values)),
   );
-  const bedSeries = measured?.beds.find((b) => b.bed === bed);
+  const bedSeries = side.series?.beds.find((b) => b.bed === bed);
   // Only beds flood and drain; a tank's or sump's level is overlaid without cycle figures.
   const isBed = systemVessels(system.scenario).beds.includes(bed);
   const measuredCycles =
     bedSeries && isBed ? detectLevelCycles(bedSeries.t_s, bedSeries.level_m) : [];
-  const measuredFigures: CycleFigures = bedSeries
+  const measured: CycleFigures = bedSeries
     ? cycleFigures(measuredCycles)
-    : figuresFromSpreads(stopwatchSpreads(entries, bed));
-  const simulatedFigures = cycleFigures(simCycles);
+    : figuresFromSpreads(stopwatchSpreads(side.entries, bed));
+  const simulated = cycleFigures(simCycles);
   const offsetS =
     measuredCycles[0] && simCycles[0] ? simCycles[0].primeS - measuredCycles[0].primeS : 0;
   const endS = series.t_s[series.t_s.length - 1] ?? 0;
@@ -107,9 +131,9 @@ export async function compareMeasurement(
     bed,
     beds: simulatedBeds,
     offsetS,
-    measured: measuredFigures,
-    simulated: simulatedFigures,
-    rows: compareFigures(measuredFigures, simulatedFigures),
+    measured,
+    simulated,
+    rows: compareFigures(measured, simulated),
     measuredSeries: bedSeries ? shiftedSeries(bedSeries, offsetS, endS, query.maxPoints) : null,
     simulatedSeries: {
       t_s: keepSim.map((i) => series.t_s[i] ?? 0),

@@ -9,6 +9,7 @@ import {
   type CsvPreview,
   type Measurement,
   type MeasuredBedOverview,
+  type StopwatchEntry,
 } from '../../shared/contracts/measurements';
 import type { User } from '../../shared/contracts/auth';
 import { requireSystemAccess } from '../auth/system-access';
@@ -130,6 +131,23 @@ export async function createCsvMeasurement(
   return getMeasurement(db, user, id);
 }
 
+/** Per bed of a stopwatch log: cycles timed, total time, lowest and highest mark read. */
+function stopwatchOverview(entries: readonly StopwatchEntry[]): MeasuredBedOverview[] {
+  return [...new Set(entries.map((e) => e.bed))].map((bed) => {
+    const mine = entries.filter((e) => e.bed === bed);
+    const marks = mine
+      .flatMap((e) => [e.highMark, e.lowMark])
+      .filter((m): m is number => m !== undefined);
+    return {
+      bed,
+      samples: mine.length,
+      durationS: mine.reduce((sum, e) => sum + e.fillTime + e.drainTime, 0),
+      minLevel_m: marks.length > 0 ? Math.min(...marks) : null,
+      maxLevel_m: marks.length > 0 ? Math.max(...marks) : null,
+    };
+  });
+}
+
 /** `POST /api/systems/:id/measurements/stopwatch`: observed cycles per bed (s and m). */
 export async function createStopwatchMeasurement(
   db: Database,
@@ -152,21 +170,7 @@ export async function createStopwatchMeasurement(
   );
   if (fields.length > 0)
     throw badRequest('Some entries name a bed this system does not have.', fields);
-  const overview: MeasuredBedOverview[] = [...new Set(request.entries.map((e) => e.bed))].map(
-    (bed) => {
-      const mine = request.entries.filter((e) => e.bed === bed);
-      const marks = mine
-        .flatMap((e) => [e.highMark, e.lowMark])
-        .filter((m): m is number => m !== undefined);
-      return {
-        bed,
-        samples: mine.length,
-        durationS: mine.reduce((sum, e) => sum + e.fillTime + e.drainTime, 0),
-        minLevel_m: marks.length > 0 ? Math.min(...marks) : null,
-        maxLevel_m: marks.length > 0 ? Math.max(...marks) : null,
-      };
-    },
-  );
+  const overview = stopwatchOverview(request.entries);
   const id = await insertMeasurement(db, {
     systemId,
     createdBy: user.id,

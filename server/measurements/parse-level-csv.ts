@@ -119,6 +119,20 @@ function readRow(
   return { ok: true, row: { line: record.line, bed, time, levelM: level.levelM } };
 }
 
+/** The chosen time format, or the one `auto` detects in the column; a failure when it cannot tell. */
+function resolveTimeFormat(
+  chosen: TimeFormat,
+  records: readonly CsvRecord[],
+  column: number,
+): ConcreteTimeFormat | Failure {
+  if (chosen !== 'auto') return chosen;
+  const detected = detectTimeFormat(records.map((r) => r.fields[column] ?? ''));
+  return (
+    detected.format ??
+    fail('TIME_FORMAT_UNKNOWN', `Cannot tell the time format: ${detected.reason}.`)
+  );
+}
+
 /** Checks the options against the file and the system, and builds the row reader. */
 function prepare(
   columns: readonly string[],
@@ -148,15 +162,8 @@ function prepare(
       `"${fixedBed}" is not a vessel of this system; choose one of ${[...vessels.keys()].join(', ')}.`,
     );
   }
-  let format: ConcreteTimeFormat;
-  if (options.time.format === 'auto') {
-    const detected = detectTimeFormat(records.map((r) => r.fields[col.time] ?? ''));
-    if (detected.format === null)
-      return fail('TIME_FORMAT_UNKNOWN', `Cannot tell the time format: ${detected.reason}.`);
-    format = detected.format;
-  } else {
-    format = options.time.format;
-  }
+  const format = resolveTimeFormat(options.time.format, records, col.time);
+  if (typeof format !== 'string') return format;
   const levelColumns = {
     level: col.level,
     ...(col.barometric !== undefined ? { barometric: col.barometric } : {}),
