@@ -5,6 +5,7 @@
  * memory stays flat with run length when the series is downsampled.
  */
 import { readFileSync } from 'node:fs';
+import { cpus, loadavg } from 'node:os';
 import { join } from 'node:path';
 import { setFlagsFromString } from 'node:v8';
 import { runInNewContext } from 'node:vm';
@@ -32,13 +33,17 @@ const median = (values: number[]): number => {
   return sorted[Math.floor(sorted.length / 2)] as number;
 };
 
+/** One run with its wall time and its process CPU time (what a shared machine cannot inflate), ms. */
 function timed(
   scenario: Scenario,
   options: SimulateOptions,
-): { wallMs: number; outcome: SimulationOutcome } {
+): { wallMs: number; cpuMs: number; outcome: SimulationOutcome } {
+  const cpu = process.cpuUsage();
   const start = performance.now();
   const outcome = simulate(scenario, options);
-  return { wallMs: performance.now() - start, outcome };
+  const wallMs = performance.now() - start;
+  const used = process.cpuUsage(cpu);
+  return { wallMs, cpuMs: (used.user + used.system) / 1000, outcome };
 }
 
 function throughput(label: string, file: string, durationS: number): void {
@@ -46,10 +51,12 @@ function throughput(label: string, file: string, durationS: number): void {
   const options = { durationS, maxSamples: 2000 };
   timed(scenario, options);
   const walls: number[] = [];
+  const cpuTimes: number[] = [];
   let last: SimulationOutcome | undefined;
   for (let k = 0; k < RUNS; k += 1) {
     const run = timed(scenario, options);
     walls.push(run.wallMs);
+    cpuTimes.push(run.cpuMs);
     last = run.outcome;
   }
   if (!last) return;
@@ -57,7 +64,7 @@ function throughput(label: string, file: string, durationS: number): void {
   const cycles = summary.beds.reduce((sum, bed) => sum + bed.cycles, 0);
   const wall = median(walls);
   console.log(
-    `${label.padEnd(28)} ${(durationS / 3600).toFixed(0).padStart(3)} h  median ${wall.toFixed(1).padStart(7)} ms (min ${Math.min(...walls).toFixed(1)})  ${Math.round(
+    `${label.padEnd(28)} ${(durationS / 3600).toFixed(0).padStart(3)} h  wall median ${wall.toFixed(1).padStart(6)} ms (min ${Math.min(...walls).toFixed(1)}), CPU median ${median(cpuTimes).toFixed(1)} ms  ${Math.round(
       durationS / (wall / 1000),
     )
       .toLocaleString('en')
@@ -141,7 +148,7 @@ function memory(): void {
 }
 
 console.log(
-  `Tidewright engine bench: medians of ${RUNS} runs after one warm-up; series downsampled to 2000 samples.`,
+  `Tidewright engine bench: medians of ${RUNS} runs after one warm-up; series downsampled to 2000 samples; load average ${loadavg()[0]?.toFixed(1)} on ${cpus().length} cores.`,
 );
 throughput('one bed (classroom tabletop)', 'tabletop-classroom.json', 24 * 3600);
 throughput('greenhouse, three beds', 'greenhouse-three-beds.json', 24 * 3600);
