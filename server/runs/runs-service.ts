@@ -13,6 +13,7 @@ import {
   type StartRunRequest,
 } from '../../shared/contracts/runs';
 import { parseQuantity, parseScenario, type Scenario } from '../../shared/scenario/index';
+import { applyCalibration } from '../measurements/apply-calibration';
 import type { SessionUser } from '../auth/session-user';
 import { requireSystemAccess, type SystemAccessNeed } from '../auth/system-access';
 import type { Database } from '../db/database';
@@ -80,7 +81,8 @@ async function checkRunLimits(deps: RunsDeps, user: User): Promise<void> {
 /** `POST /api/systems/:id/runs`. */
 export async function startRun(deps: RunsDeps, user: User, systemId: string, request: StartRunRequest): Promise<StartRunResult> {
   const { system } = await requireSystemAccess(deps.db, user, systemId, 'write');
-  const scenario = normalisedScenario(system.scenario);
+  // Calibrated coefficients fitted from the user's measurements apply to every later run.
+  const scenario = applyCalibration(normalisedScenario(system.scenario), system.calibration);
   const durationS = chooseDurationS(request, scenario, deps.pool.options.maxDurationS);
   const outputIntervalS = scenario.run.outputInterval;
   await checkRunLimits(deps, user);
