@@ -10,6 +10,7 @@ import { runsRouter } from './runs/runs-router';
 import { classroomRouter } from './classroom/classroom-router';
 import { measurementsRouter } from './measurements/measurements-router';
 import { sweepsRouter } from './sweeps/sweeps-router';
+import { sizingRouter } from './sizing/sizing-router';
 
 /** Mounts every resource's router. Features add their line here. */
 export function apiRouter(ctx: AppContext): Router {
@@ -22,6 +23,7 @@ export function apiRouter(ctx: AppContext): Router {
   router.use(classroomRouter(ctx));
   router.use(measurementsRouter(ctx));
   router.use(sweepsRouter(ctx));
+  router.use(sizingRouter(ctx));
   router.use(notFoundHandler);
   return router;
 }

@@ -17,6 +17,7 @@ import { systemsRoutes } from './routes/systems-routes';
 import { classroomRoutes } from './routes/classroom-routes';
 import { measurementsRoutes } from './routes/measurements-routes';
 import { sweepsRoutes } from './routes/sweeps-routes';
+import { sizingRoutes } from './routes/sizing-routes';
 
 /** An HTTP method as supertest names it. */
 export type HttpMethod = 'get' | 'post' | 'put' | 'patch' | 'delete';
@@ -81,6 +82,7 @@ export const routeGroups: readonly RouteGroup[] = [
   classroomRoutes,
   measurementsRoutes,
   sweepsRoutes,
+  sizingRoutes,
 ];
 
 /** All route cases of all groups. */
