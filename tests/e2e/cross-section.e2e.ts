@@ -84,6 +84,12 @@ test('plays the greenhouse run in the cross-section, steps to the first priming 
   mkdirSync(artifacts, { recursive: true });
   await page.setViewportSize({ width: 1366, height: 900 });
   const watch = watchPage(page, ['/api/auth/me']);
+  const seriesLoads: { bytes: number; ms: number }[] = [];
+  page.on('requestfinished', async (request) => {
+    if (!request.url().includes('/series?channels=')) return;
+    const body = await (await request.response())?.body();
+    seriesLoads.push({ bytes: body?.length ?? 0, ms: request.timing().responseEnd });
+  });
   await signInAsDemo(page);
   const runId = await runGreenhouse(page);
 
@@ -112,6 +118,7 @@ test('plays the greenhouse run in the cross-section, steps to the first priming 
   });
   const per = (name: string) => ((after[name] ?? 0) - (before[name] ?? 0)) / frames.frames;
   const figures = {
+    seriesLoad: seriesLoads[0] ?? null,
     speed: 600,
     viewport: '1366x900',
     pageFrames: frames,
