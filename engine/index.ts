@@ -21,15 +21,8 @@ export type {
   Verdict,
   VesselSummary,
 } from './results/run-result';
-export {
-  primingFlowM3PerS,
-  rimSpillFlowM3PerS,
-  siphonFullBoreFlowM3PerS,
-  spillNumber,
-  STANDARD_GRAVITY_M_PER_S2,
-  torricelliOutflowM3PerS,
-  weirFlowM3PerS,
-} from './hydraulics/index';
+/** The static physics: water properties, orifice, weir, friction, fittings, pump curves, storage. */
+export * from './hydraulics/index';
 export {
   bedRegime,
   bedStructuralLoad,

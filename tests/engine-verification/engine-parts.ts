@@ -1,6 +1,5 @@
 /**
  * The engine parts the reference checks exercise, gathered in one place. They reach the engine's
- * static physics through its public surface for it (engine/hydraulics/index.ts), which
- * engine/index.ts re-exports.
+ * static physics through the engine's public surface, engine/index.ts.
  */
-export * from '../../engine/hydraulics/index';
+export * from '../../engine/index';
