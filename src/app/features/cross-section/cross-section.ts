@@ -19,23 +19,20 @@ import { MatIconModule } from '@angular/material/icon';
 import type { Scenario, UnitSystem } from '../../../../shared/scenario';
 import { displayScale } from '../../ui/time-series-chart/display-scale';
 import { ELEVATION_WIDTH } from '../systems/elevation-drawing/draw-elevation';
-import { AttributeWriter } from './attribute-writer';
 import { bedReadouts } from './bed-readouts';
-import { type Caption, CaptionPicker } from './caption-picker';
+import { CaptionHold } from './caption-hold';
+import { CaptionPicker } from './caption-picker';
 import type { CrossSectionEvent, CrossSectionSeries } from './cross-section-data';
 import { buildCrossSectionScene } from './cross-section-scene';
-import { drawScene } from './draw-scene';
+import { CLOSE_UP_SIZE } from './draw-close-up';
 import { ExplainPanel } from './explain-panel';
-import { FrameTimer } from './frame-timer';
-import { type CloseUpHandles, CLOSE_UP_SIZE, drawCloseUp } from './draw-close-up';
-import { paintCloseUp, paintScene } from './paint-scene';
 import { explainPhase } from './phase-explanation';
 import { PlaybackBar } from './playback-bar';
 import { BROWSER_FRAMES, type FrameScheduler, PlaybackController } from './playback-controller';
 import { PresentationScreen } from './presentation-screen';
-import { SHORTCUTS, shortcutFor } from './playback-shortcuts';
+import { SHORTCUTS, type ShortcutAction, shortcutFor } from './playback-shortcuts';
 import { sceneFrame } from './scene-frame';
-import type { SceneHandles } from './scene-handles';
+import { SceneRenderer } from './scene-renderer';
 import { SceneSampler } from './scene-sampler';
 
 /** Where animation frames come from (specs hand in a fake they step by hand). */
@@ -46,10 +43,6 @@ export const CROSS_SECTION_FRAMES = new InjectionToken<FrameScheduler>('CROSS_SE
 
 /** Vertical exaggerations offered. */
 export const EXAGGERATIONS: readonly number[] = [1, 2, 4];
-/** A caption stays up at least this long (wall ms) before a newer event replaces it. */
-const CAPTION_HOLD_MS = 2500;
-/** An event is captioned while it is at most this many wall seconds old. */
-const CAPTION_WALL_S = 4;
 
 let nextId = 1;
 
@@ -95,7 +88,8 @@ export class CrossSection {
   protected readonly captionsOn = signal(true);
   protected readonly explainOn = signal(false);
   protected readonly explainBedId = signal<string | null>(null);
-  protected readonly caption = signal<Caption | null>(null);
+  private readonly captionHold = new CaptionHold();
+  protected readonly caption = this.captionHold.caption;
   protected readonly screen = new PresentationScreen(
     inject<ElementRef<HTMLElement>>(ElementRef).nativeElement,
   );
@@ -103,12 +97,7 @@ export class CrossSection {
   private readonly svgLayer = viewChild.required<ElementRef<SVGGElement>>('layer');
   private readonly closeUpLayer = viewChild.required<ElementRef<SVGGElement>>('closeUpLayer');
   protected readonly closeUpViewBox = `0 0 ${CLOSE_UP_SIZE.width} ${CLOSE_UP_SIZE.height}`;
-  private readonly writer = new AttributeWriter();
-  private readonly timer = new FrameTimer();
-  private handles: SceneHandles | null = null;
-  private closeUp: CloseUpHandles | null = null;
-  private offsets = new Float64Array(0);
-  private captionShownAtMs = 0;
+  private readonly renderer = new SceneRenderer(this.id);
   private lastEmittedS: number | null = null;
   private readonly frames = inject(CROSS_SECTION_FRAMES);
   readonly playback = new PlaybackController(this.frames, (t, step) => this.drawFrame(t, step));
@@ -205,17 +194,12 @@ export class CrossSection {
     });
   }
 
-  /** Per-frame paint timings since the last play (median and 95th percentile, ms). */
-  frameTimings(): { frames: number; medianMs: number; p95Ms: number } {
-    return this.timer.summary();
-  }
-
   protected togglePlay(): void {
     if (this.playback.playing()) {
       this.playback.pause();
-      this.timer.report();
+      this.renderer.timer.report();
     } else {
-      this.timer.reset();
+      this.renderer.timer.reset();
       this.playback.play();
     }
   }
@@ -252,21 +236,26 @@ export class CrossSection {
     const action = shortcutFor(event);
     if (!action) return;
     event.preventDefault();
-    if (action === 'toggle-play') this.togglePlay();
-    else if (action === 'next-event') this.stepEvent(1);
-    else if (action === 'previous-event') this.stepEvent(-1);
-    else if (action === 'forward') this.playback.seek(this.playback.time + 60);
-    else if (action === 'back') this.playback.seek(this.playback.time - 60);
-    else if (action === 'faster') this.playback.stepSpeed(1);
-    else if (action === 'slower') this.playback.stepSpeed(-1);
-    else if (action === 'start') this.playback.seek(this.startS());
-    else if (action === 'end') this.playback.seek(this.endS());
-    else if (action === 'captions') this.toggleCaptions();
-    else if (action === 'explain') this.toggleExplain();
-    else if (action === 'exaggerate') this.cycleExaggeration();
-    else if (action === 'present') this.togglePresentation();
-    else if (action === 'leave') void this.screen.leave();
+    this.actions[action]();
   }
+
+  /** What each shortcut does. */
+  private readonly actions: Readonly<Record<ShortcutAction, () => void>> = {
+    'toggle-play': () => this.togglePlay(),
+    'next-event': () => this.stepEvent(1),
+    'previous-event': () => this.stepEvent(-1),
+    forward: () => this.playback.seek(this.playback.time + 60),
+    back: () => this.playback.seek(this.playback.time - 60),
+    faster: () => this.playback.stepSpeed(1),
+    slower: () => this.playback.stepSpeed(-1),
+    start: () => this.playback.seek(this.startS()),
+    end: () => this.playback.seek(this.endS()),
+    captions: () => this.toggleCaptions(),
+    explain: () => this.toggleExplain(),
+    exaggerate: () => this.cycleExaggeration(),
+    present: () => this.togglePresentation(),
+    leave: () => void this.screen.leave(),
+  };
 
   private cycleExaggeration(): void {
     const index = EXAGGERATIONS.indexOf(this.exaggeration());
@@ -281,14 +270,7 @@ export class CrossSection {
     const units = displayScale('length', this.system());
     this.sampler();
     untracked(() => {
-      this.writer.clear();
-      this.handles = drawScene(layer, {
-        scene,
-        frame,
-        units,
-        patterns: { gravel: `${this.id}-gravel`, clay: `${this.id}-clay`, air: `${this.id}-air` },
-      });
-      this.offsets = new Float64Array(scene.pipes.length);
+      this.renderer.drawScene(layer, scene, frame, units);
       this.drawFrame(this.playback.time, 0);
     });
   }
@@ -297,59 +279,27 @@ export class CrossSection {
   private redrawCloseUp(): void {
     const layer = this.closeUpLayer().nativeElement;
     const scene = this.scene();
-    const bedIndex = scene.beds.findIndex((b) => b.id === this.explainedBedId());
-    const bed = scene.beds[bedIndex];
+    const bedId = this.explainedBedId();
     this.frame();
     untracked(() => {
-      if (!bed) {
-        layer.replaceChildren();
-        this.closeUp = null;
-        return;
-      }
-      const vesselIndex = scene.vessels.findIndex((v) => v.id === bed.id);
-      const media = bed.media.type === 'expanded-clay' ? 'clay' : 'gravel';
-      this.closeUp = drawCloseUp(
-        layer,
-        bed,
-        bedIndex,
-        vesselIndex,
-        `${this.id}-air`,
-        `${this.id}-${media}`,
-      );
+      this.renderer.drawCloseUp(layer, scene, bedId);
       this.drawFrame(this.playback.time, 0);
     });
   }
 
-  /** One animation frame: sample the run at `timeS` and move what changed. */
+  /** One animation frame: paint the run at `timeS`, then the caption for it. */
   private drawFrame(timeS: number, wallStepS: number): void {
-    const handles = this.handles;
-    if (!handles) return;
-    const started = this.timer.start();
-    const sampler = untracked(() => this.sampler());
-    const state = sampler.sample(timeS);
-    const context = {
-      frame: untracked(() => this.frame()),
-      writer: this.writer,
-      busiestM3PerS: sampler.busiestM3PerS,
-      wallStepS,
-      offsets: this.offsets,
-      primingCoefficients: untracked(() => this.primingCoefficients()),
-      speed: untracked(() => this.playback.speed()),
-    };
-    paintScene(handles, state, context);
-    if (this.closeUp) paintCloseUp(this.closeUp, state, context);
-    this.updateCaption(timeS, wallStepS === 0);
-    this.timer.stop(started);
-  }
-
-  private updateCaption(timeS: number, jumped: boolean): void {
-    const now = this.frames.now();
-    const maxAgeS = Math.max(1, untracked(() => this.playback.speed()) * CAPTION_WALL_S);
-    const next = untracked(() => this.captions()).at(timeS, maxAgeS);
-    const current = untracked(() => this.caption());
-    if (next?.key === current?.key) return;
-    if (!jumped && current !== null && now - this.captionShownAtMs < CAPTION_HOLD_MS) return;
-    this.captionShownAtMs = now;
-    this.caption.set(next);
+    untracked(() => {
+      const speed = this.playback.speed();
+      this.renderer.paint({
+        sampler: this.sampler(),
+        timeS,
+        wallStepS,
+        frame: this.frame(),
+        primingCoefficients: this.primingCoefficients(),
+        speed,
+      });
+      this.captionHold.update(this.captions(), timeS, speed, this.frames.now(), wallStepS === 0);
+    });
   }
 }
