@@ -72,6 +72,7 @@ function answer(tankLowestM: number): SimulationDone {
         rhsEvaluations: 60,
         events: 0,
         wall_ms: 700,
+        eventsOmitted: 0,
         simulated_s: 2520,
       },
       series: { t_s: [], channels: [] },

@@ -42,6 +42,7 @@ class RecordingWorker implements SimulationWorker {
           rhsEvaluations: 0,
           events: 0,
           wall_ms: 1,
+          eventsOmitted: 0,
           simulated_s: request.durationS,
         },
         series: { t_s: [], channels: [] },
