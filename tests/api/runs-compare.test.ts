@@ -67,21 +67,23 @@ describe('runs across users and limits', () => {
   });
 
   it('fails a run that passes the wall-time limit, saying what to do, and keeps its partial result', async () => {
-    // A long grace, so the engine's own stop (with its partial result) always comes before a hard kill.
-    w = await createRunsWorld({ timeLimitMs: 300, graceMs: 60_000 });
+    // 30 simulated days take seconds; a 5 ms limit stops them early. A long grace lets the engine's
+    // own stop (with its partial result) come before the pool's hard kill.
+    w = await createRunsWorld({ timeLimitMs: 5, graceMs: 60_000 });
     const system = await createSystem(w.owner);
-    const run = await runSystem(w.owner, system.id, { duration: '24 h' });
+    const started = RunStartedSchema.parse((await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: '30 days' })).body);
+    const run = await pollRun(w.owner, started.id, (r) => r.status !== 'queued' && r.status !== 'running');
     expect(run.status).toBe('failed');
-    expect(run.error).toMatch(/0\.3 s time limit/);
+    expect(run.error).toMatch(/5 ms time limit/);
     expect(run.error).toMatch(/shorten the duration/);
     expect(run.summary).not.toBeNull();
-    expect(run.stats?.simulated_s).toBeLessThan(24 * 3600);
+    expect(run.stats?.simulated_s).toBeLessThan(30 * 86400);
   });
 
   it('refuses a run beyond the per-user limit of runs going at once with 429', async () => {
     w = await createRunsWorld({ maxActivePerUser: 1 });
     const system = await createSystem(w.owner);
-    const first = RunStartedSchema.parse((await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: '20 days', async: true })).body);
+    const first = RunStartedSchema.parse((await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: '30 days', async: true })).body);
     const second = await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: 60 });
     expect(second.status).toBe(429);
     expect(ApiErrorSchema.parse(second.body).error.code).toBe('TOO_MANY_RUNS');
@@ -92,7 +94,7 @@ describe('runs across users and limits', () => {
   it('cancels the runs of a system that is deleted while they are going', async () => {
     w = await createRunsWorld();
     const system = await createSystem(w.owner);
-    const started = RunStartedSchema.parse((await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: '20 days', async: true })).body);
+    const started = RunStartedSchema.parse((await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: '30 days', async: true })).body);
     await pollRun(w.owner, started.id, (r) => r.status === 'running');
     expect((await w.owner.delete(`/api/systems/${system.id}`)).status).toBe(204);
     expect(w.pool.status(started.id)).toBeUndefined();
