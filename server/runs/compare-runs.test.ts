@@ -2,7 +2,12 @@ import { describe, expect, it } from 'vitest';
 import type { RunSummary, Verdict } from '../../shared/contracts/runs';
 import { compareRuns } from './compare-runs';
 
-const bed = (id: string, cycles: number, period: number | null, state: RunSummary['beds'][number]['state']) => ({
+const bed = (
+  id: string,
+  cycles: number,
+  period: number | null,
+  state: RunSummary['beds'][number]['state'],
+) => ({
   id,
   cycles,
   periodMean_s: period,
@@ -17,10 +22,19 @@ const summary = (beds: RunSummary['beds'], minTank: number): RunSummary => ({
   vessels: [{ id: 'tank', minLevel_m: minTank, minLevelAt_s: 100, maxLevel_m: 0.55, lost_m3: 0 }],
   pumps: [{ id: 'pump', meanFlow_m3s: 3e-4, dry_s: 0, energy_J: 1000 }],
 });
-const verdict = (check: string, status: Verdict['status']): Verdict => ({ check, status, value: 1, limit: 2, source: 'test' });
+const verdict = (check: string, status: Verdict['status']): Verdict => ({
+  check,
+  status,
+  value: 1,
+  limit: 2,
+  source: 'test',
+});
 
 describe('compareRuns', () => {
-  const a = { summary: summary([bed('bed-a', 10, 600, 'cycling')], 0.45), verdicts: [verdict('tank-min', 'ok'), verdict('bed-a-cycles', 'ok')] };
+  const a = {
+    summary: summary([bed('bed-a', 10, 600, 'cycling')], 0.45),
+    verdicts: [verdict('tank-min', 'ok'), verdict('bed-a-cycles', 'ok')],
+  };
   const b = {
     summary: summary([bed('bed-a', 8, 750, 'cycling'), bed('bed-b', 0, null, 'siphon-lock')], 0.38),
     verdicts: [verdict('tank-min', 'fails'), verdict('bed-b-cycles', 'fails')],
@@ -29,7 +43,15 @@ describe('compareRuns', () => {
 
   it('gives per-bed rows with b − a and marks changes', () => {
     const period = table.beds.find((r) => r.where === 'bed-a' && r.metric === 'periodMean_s');
-    expect(period).toEqual({ where: 'bed-a', metric: 'periodMean_s', unit: 's', a: 600, b: 750, delta: 150, changed: true });
+    expect(period).toEqual({
+      where: 'bed-a',
+      metric: 'periodMean_s',
+      unit: 's',
+      a: 600,
+      b: 750,
+      delta: 150,
+      changed: true,
+    });
     const high = table.beds.find((r) => r.where === 'bed-a' && r.metric === 'highLevel_m');
     expect(high?.changed).toBe(false);
     expect(high?.delta).toBe(0);

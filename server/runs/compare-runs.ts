@@ -1,5 +1,11 @@
 /** The table of differences between two runs' summaries and verdicts (`GET /api/runs/compare`). */
-import type { CompareRow, RunComparison, RunSummary, Verdict, VerdictChange } from '../../shared/contracts/runs';
+import type {
+  CompareRow,
+  RunComparison,
+  RunSummary,
+  Verdict,
+  VerdictChange,
+} from '../../shared/contracts/runs';
 
 /** The result parts of one run that a comparison reads (null when the run produced none). */
 export interface ComparedResult {
@@ -41,7 +47,11 @@ function unionIds(a: readonly Row[], b: readonly Row[]): string[] {
 }
 
 /** One row per (item, metric) present in either run. */
-export function compareRows(a: readonly Row[], b: readonly Row[], metrics: readonly Metric[]): CompareRow[] {
+export function compareRows(
+  a: readonly Row[],
+  b: readonly Row[],
+  metrics: readonly Metric[],
+): CompareRow[] {
   const rows: CompareRow[] = [];
   for (const id of unionIds(a, b)) {
     const left = a.find((r) => r.id === id);

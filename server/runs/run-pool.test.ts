@@ -67,7 +67,10 @@ describe('RunPool', () => {
     const queued = submit(pool, 'queued', { mode: 'finish', ms: 10 });
     await until(() => pool?.status('running')?.state === 'running');
     expect(await pool.cancel('queued')).toBe(true);
-    expect(queued.outcome()).toMatchObject({ status: 'cancelled', error: 'Cancelled before it started.' });
+    expect(queued.outcome()).toMatchObject({
+      status: 'cancelled',
+      error: 'Cancelled before it started.',
+    });
     expect(await pool.cancel('running')).toBe(true);
     expect(running.outcome()).toMatchObject({ status: 'cancelled', error: 'stopped by flag' });
     expect(await pool.cancel('running')).toBe(false);
@@ -109,7 +112,9 @@ describe('RunPool', () => {
     submit(pool, 'one', { mode: 'honour-stop', ms: 0 });
     await until(() => pool?.status('one')?.state === 'running');
     submit(pool, 'two', { mode: 'finish', ms: 10 });
-    expect(() => submit(pool as RunPool, 'three', { mode: 'finish', ms: 10 })).toThrow(RunQueueFullError);
+    expect(() => submit(pool as RunPool, 'three', { mode: 'finish', ms: 10 })).toThrow(
+      RunQueueFullError,
+    );
   });
 
   it('ends every job as failed when closed', async () => {

@@ -118,14 +118,22 @@ export class RunPool {
   submit(job: RunJob): Promise<void> {
     if (this.closed) throw new Error('The run pool is closed.');
     if (this.queue.length >= this.options.maxQueued) {
-      throw new RunQueueFullError(`The server already has ${this.queue.length} runs waiting; try again in a minute.`);
+      throw new RunQueueFullError(
+        `The server already has ${this.queue.length} runs waiting; try again in a minute.`,
+      );
     }
     let resolve: (outcome: RunJobOutcome) => void = () => {};
     const outcome = new Promise<RunJobOutcome>((r) => {
       resolve = r;
     });
     const ended = outcome.then((o) => job.onEnd(o)).finally(() => this.ending.delete(job.id));
-    const pending: Pending = { job, stopFlag: new Int32Array(new SharedArrayBuffer(4)), progress: 0, resolve, ended };
+    const pending: Pending = {
+      job,
+      stopFlag: new Int32Array(new SharedArrayBuffer(4)),
+      progress: 0,
+      resolve,
+      ended,
+    };
     this.jobs.set(job.id, pending);
     this.queue.push(pending);
     this.dispatch();
@@ -135,7 +143,8 @@ export class RunPool {
   /** Whether a job is waiting or running here, and its progress 0..1; undefined when not here. */
   status(jobId: string): { state: 'queued' | 'running'; progress: number } | undefined {
     const pending = this.jobs.get(jobId);
-    if (pending) return { state: pending.worker ? 'running' : 'queued', progress: pending.progress };
+    if (pending)
+      return { state: pending.worker ? 'running' : 'queued', progress: pending.progress };
     return this.ending.has(jobId) ? { state: 'running', progress: 1 } : undefined;
   }
 
@@ -152,10 +161,17 @@ export class RunPool {
     }
     if (!pending.worker) {
       this.queue.splice(this.queue.indexOf(pending), 1);
-      this.settle(pending, { ...failedOutcome('Cancelled before it started.'), status: 'cancelled' });
+      this.settle(pending, {
+        ...failedOutcome('Cancelled before it started.'),
+        status: 'cancelled',
+      });
     } else {
       Atomics.store(pending.stopFlag, 0, 1);
-      this.armKill(pending, this.options.graceMs, 'Cancelled; the simulation did not stop in time, so its worker was stopped.');
+      this.armKill(
+        pending,
+        this.options.graceMs,
+        'Cancelled; the simulation did not stop in time, so its worker was stopped.',
+      );
     }
     await pending.ended.catch(() => undefined);
     return true;
@@ -209,7 +225,11 @@ export class RunPool {
       timeLimitMs: this.options.timeLimitMs,
       stopFlag: pending.stopFlag.buffer,
     });
-    this.armKill(pending, this.options.timeLimitMs + this.options.graceMs, timeLimitMessage(this.options.timeLimitMs));
+    this.armKill(
+      pending,
+      this.options.timeLimitMs + this.options.graceMs,
+      timeLimitMessage(this.options.timeLimitMs),
+    );
   }
 
   private armKill(pending: Pending, afterMs: number, error: string): void {
@@ -248,7 +268,11 @@ export class RunPool {
     const index = this.workers.indexOf(worker);
     if (index < 0) return;
     this.workers.splice(index, 1);
-    if (worker.current) this.settle(worker.current, failedOutcome(`The simulation worker stopped unexpectedly (${why}); run it again.`));
+    if (worker.current)
+      this.settle(
+        worker.current,
+        failedOutcome(`The simulation worker stopped unexpectedly (${why}); run it again.`),
+      );
     if (!this.closed) this.dispatch();
   }
 

@@ -1,5 +1,10 @@
 /** A run's stored results: series (JSON and CSV), the downloadable result file, and comparisons. */
-import type { RunComparison, RunResultFile, RunSeries, RunSeriesQuery } from '../../shared/contracts/runs';
+import type {
+  RunComparison,
+  RunResultFile,
+  RunSeries,
+  RunSeriesQuery,
+} from '../../shared/contracts/runs';
 import type { SessionUser } from '../auth/session-user';
 import { findSystemAccess } from '../auth/system-access';
 import { notFound } from '../http/http-error';
@@ -22,25 +27,39 @@ async function loadSeries(deps: RunsDeps, runId: string): Promise<DecodedSeries 
 const EMPTY: DecodedSeries = { t_s: new Float64Array(0), channels: [] };
 
 /** `GET /api/runs/:id/series`: the chart data (empty when the run has no series yet). */
-export async function getRunSeries(deps: RunsDeps, user: User, runId: string, query: RunSeriesQuery): Promise<RunSeries> {
+export async function getRunSeries(
+  deps: RunsDeps,
+  user: User,
+  runId: string,
+  query: RunSeriesQuery,
+): Promise<RunSeries> {
   const row = await requireRun(deps.db, user, runId, 'read');
   const series = (await loadSeries(deps, row.id)) ?? EMPTY;
   return seriesToJson(selectSeries(series, query));
 }
 
 /** `GET /api/runs/:id/series.csv`: header `t_s,<channel ids>`, one row per sample. */
-export async function getRunSeriesCsv(deps: RunsDeps, user: User, runId: string): Promise<{ fileName: string; csv: string }> {
+export async function getRunSeriesCsv(
+  deps: RunsDeps,
+  user: User,
+  runId: string,
+): Promise<{ fileName: string; csv: string }> {
   const row = await requireRun(deps.db, user, runId, 'read');
   const series = (await loadSeries(deps, row.id)) ?? EMPTY;
   return { fileName: `run-${row.id.slice(0, 8)}-series.csv`, csv: seriesToCsv(series) };
 }
 
 /** `GET /api/runs/:id/result.json`: run, normalised scenario snapshot and the full result. */
-export async function getRunResultFile(deps: RunsDeps, user: User, runId: string): Promise<{ fileName: string; file: RunResultFile }> {
+export async function getRunResultFile(
+  deps: RunsDeps,
+  user: User,
+  runId: string,
+): Promise<{ fileName: string; file: RunResultFile }> {
   const row = await requireRun(deps.db, user, runId, 'read');
   const run = toRun(row, deps.pool);
   const series = await loadSeries(deps, row.id);
-  const { id, systemId, systemVersion, status, durationS, verdict, error, createdAt, finishedAt } = run;
+  const { id, systemId, systemVersion, status, durationS, verdict, error, createdAt, finishedAt } =
+    run;
   const file: RunResultFile = {
     format: 'tidewright-run/1',
     run: { id, systemId, systemVersion, status, durationS, verdict, error, createdAt, finishedAt },
@@ -56,8 +75,16 @@ export async function getRunResultFile(deps: RunsDeps, user: User, runId: string
 }
 
 /** `GET /api/runs/compare?a=&b=`: differences between two runs the user can read. */
-export async function compareTwoRuns(deps: RunsDeps, user: User, aId: string, bId: string): Promise<RunComparison> {
-  const [a, b] = await Promise.all([requireRun(deps.db, user, aId, 'read'), requireRun(deps.db, user, bId, 'read')]);
+export async function compareTwoRuns(
+  deps: RunsDeps,
+  user: User,
+  aId: string,
+  bId: string,
+): Promise<RunComparison> {
+  const [a, b] = await Promise.all([
+    requireRun(deps.db, user, aId, 'read'),
+    requireRun(deps.db, user, bId, 'read'),
+  ]);
   const side = async (row: typeof a) => {
     const run = toRun(row, deps.pool);
     const access = await findSystemAccess(deps.db, user.id, row.systemId);

@@ -8,7 +8,12 @@ import { performance } from 'node:perf_hooks';
 import { parentPort } from 'node:worker_threads';
 import { ScenarioModelError, simulate, type SimulationOutcome } from '../../engine/index';
 import type { Scenario } from '../../shared/scenario/index';
-import type { RunJobMessage, RunJobOutcome, RunResultParts, RunWorkerMessage } from './run-worker-messages';
+import type {
+  RunJobMessage,
+  RunJobOutcome,
+  RunResultParts,
+  RunWorkerMessage,
+} from './run-worker-messages';
 import { encodeSeries } from './series-codec';
 import { timeLimitMessage } from './time-limit-message';
 
@@ -30,10 +35,22 @@ function resultParts(outcome: SimulationOutcome, wallMs: number): RunResultParts
   };
 }
 
-function describeStop(cause: 'cancel' | 'time' | null, job: RunJobMessage, reason: string | undefined) {
-  if (cause === 'cancel') return { status: 'cancelled' as const, error: 'Cancelled before the end; the result is partial.' };
-  if (cause === 'time') return { status: 'failed' as const, error: timeLimitMessage(job.timeLimitMs) };
-  return { status: 'stopped' as const, error: reason ?? 'The engine stopped before the end of the run.' };
+function describeStop(
+  cause: 'cancel' | 'time' | null,
+  job: RunJobMessage,
+  reason: string | undefined,
+) {
+  if (cause === 'cancel')
+    return {
+      status: 'cancelled' as const,
+      error: 'Cancelled before the end; the result is partial.',
+    };
+  if (cause === 'time')
+    return { status: 'failed' as const, error: timeLimitMessage(job.timeLimitMs) };
+  return {
+    status: 'stopped' as const,
+    error: reason ?? 'The engine stopped before the end of the run.',
+  };
 }
 
 function runJob(job: RunJobMessage): { outcome: RunJobOutcome; transfer: ArrayBuffer[] } {
@@ -60,7 +77,10 @@ function runJob(job: RunJobMessage): { outcome: RunJobOutcome; transfer: ArrayBu
   const sampleCount = outcome.result.series.t_s.length;
   if (sampleCount > job.options.maxSamples) {
     const error = `The run recorded ${sampleCount} samples, over the limit of ${job.options.maxSamples}; lengthen run.outputInterval or shorten the duration.`;
-    return { outcome: { status: 'failed', error, result: null, series: null, sampleCount: 0, wallMs }, transfer: [] };
+    return {
+      outcome: { status: 'failed', error, result: null, series: null, sampleCount: 0, wallMs },
+      transfer: [],
+    };
   }
   const encoded = sampleCount > 0 ? new Uint8Array(encodeSeries(outcome.result.series)) : null;
   const ended =
@@ -70,7 +90,13 @@ function runJob(job: RunJobMessage): { outcome: RunJobOutcome; transfer: ArrayBu
         ? { status: 'failed' as const, error: outcome.reason ?? 'The simulation failed.' }
         : describeStop(cause, job, outcome.reason);
   return {
-    outcome: { ...ended, result: resultParts(outcome, wallMs), series: encoded, sampleCount, wallMs },
+    outcome: {
+      ...ended,
+      result: resultParts(outcome, wallMs),
+      series: encoded,
+      sampleCount,
+      wallMs,
+    },
     transfer: encoded ? [encoded.buffer as ArrayBuffer] : [],
   };
 }

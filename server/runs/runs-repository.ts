@@ -15,7 +15,13 @@ export const ACTIVE_RUN_STATUSES = ['queued', 'running'] as const;
 /** Inserts a queued run with its normalised scenario snapshot. */
 export async function insertRun(
   db: Database,
-  values: { systemId: string; createdBy: string; durationS: number; systemVersion: number; scenario: unknown },
+  values: {
+    systemId: string;
+    createdBy: string;
+    durationS: number;
+    systemVersion: number;
+    scenario: unknown;
+  },
 ): Promise<RunRow> {
   const [row] = await db
     .insert(runs)
@@ -27,7 +33,10 @@ export async function insertRun(
 
 /** Marks a queued run as running (no effect once it has moved on). */
 export async function markRunRunning(db: Database, id: string): Promise<void> {
-  await db.update(runs).set({ status: 'running' }).where(and(eq(runs.id, id), eq(runs.status, 'queued')));
+  await db
+    .update(runs)
+    .set({ status: 'running' })
+    .where(and(eq(runs.id, id), eq(runs.status, 'queued')));
 }
 
 /** What an ended run stores. */
@@ -59,7 +68,10 @@ export async function findRun(db: Database, id: string): Promise<RunRow | undefi
 }
 
 /** A run's stored series bytes (null when it has none), or undefined when the run is gone. */
-export async function findRunSeries(db: Database, id: string): Promise<{ series: Buffer | null } | undefined> {
+export async function findRunSeries(
+  db: Database,
+  id: string,
+): Promise<{ series: Buffer | null } | undefined> {
   const [row] = await db.select({ series: runs.series }).from(runs).where(eq(runs.id, id));
   return row;
 }
@@ -74,7 +86,14 @@ const VERDICT_RANK = sql`case ${runs.verdict} when 'ok' then 0 when 'warning' th
 function orderFor(sort: RunListQuery['sort']): SQL[] {
   const descending = sort.startsWith('-');
   const key = sort.replace(/^-/, '');
-  const column = key === 'durationS' ? runs.durationS : key === 'status' ? runs.status : key === 'verdict' ? VERDICT_RANK : runs.createdAt;
+  const column =
+    key === 'durationS'
+      ? runs.durationS
+      : key === 'status'
+        ? runs.status
+        : key === 'verdict'
+          ? VERDICT_RANK
+          : runs.createdAt;
   const primary = descending ? desc(column) : asc(column);
   return [primary, desc(runs.createdAt), desc(runs.id)];
 }
@@ -102,7 +121,10 @@ export async function listRunsOfSystem(
 }
 
 /** The verdict of the system's most recent completed run, or null when none completed. */
-export async function latestCompletedVerdict(db: Database, systemId: string): Promise<string | null> {
+export async function latestCompletedVerdict(
+  db: Database,
+  systemId: string,
+): Promise<string | null> {
   const [row] = await db
     .select({ verdict: runs.verdict })
     .from(runs)

@@ -12,7 +12,12 @@ import { currentUser } from '../auth/session-user';
 import { requireAuth } from '../http/require-auth';
 import { parseOr400 } from '../http/validate';
 import { runsDepsFor } from './run-pool-for';
-import { compareTwoRuns, getRunResultFile, getRunSeries, getRunSeriesCsv } from './run-results-service';
+import {
+  compareTwoRuns,
+  getRunResultFile,
+  getRunSeries,
+  getRunSeriesCsv,
+} from './run-results-service';
 import { cancelRun, deleteRun, getRun, listRuns, startRun } from './runs-service';
 
 const param = (req: Request, name: string): string => String(req.params[name] ?? '');

@@ -46,7 +46,11 @@ type User = Pick<SessionUser, 'id'>;
 export type StartRunResult = { kind: 'ended'; run: Run } | { kind: 'started'; started: RunStarted };
 
 /** The run's simulated duration, s: the request's, else the scenario's; checked against the limit. */
-export function chooseDurationS(request: StartRunRequest, scenario: Scenario, maxDurationS: number): number {
+export function chooseDurationS(
+  request: StartRunRequest,
+  scenario: Scenario,
+  maxDurationS: number,
+): number {
   let durationS = scenario.run.duration;
   if (request.duration !== undefined) {
     const parsed = parseQuantity(request.duration, 'time', 'duration');
@@ -66,7 +70,10 @@ export function chooseDurationS(request: StartRunRequest, scenario: Scenario, ma
 function normalisedScenario(document: unknown): Scenario {
   const parsed = parseScenario(document);
   if (parsed.success) return parsed.scenario;
-  const fields = parsed.issues.map((i) => ({ path: i.path ? `scenario.${i.path}` : 'scenario', message: i.message }));
+  const fields = parsed.issues.map((i) => ({
+    path: i.path ? `scenario.${i.path}` : 'scenario',
+    message: i.message,
+  }));
   throw badRequest('The system has scenario problems to fix before it can run.', fields);
 }
 
@@ -74,12 +81,21 @@ function normalisedScenario(document: unknown): Scenario {
 async function checkRunLimits(deps: RunsDeps, user: User): Promise<void> {
   const { maxActivePerUser } = deps.pool.options;
   if ((await countActiveRunsOfUser(deps.db, user.id)) >= maxActivePerUser) {
-    throw new HttpError(429, 'TOO_MANY_RUNS', `You already have ${maxActivePerUser} runs going; wait for one to end or cancel one.`);
+    throw new HttpError(
+      429,
+      'TOO_MANY_RUNS',
+      `You already have ${maxActivePerUser} runs going; wait for one to end or cancel one.`,
+    );
   }
 }
 
 /** `POST /api/systems/:id/runs`. */
-export async function startRun(deps: RunsDeps, user: User, systemId: string, request: StartRunRequest): Promise<StartRunResult> {
+export async function startRun(
+  deps: RunsDeps,
+  user: User,
+  systemId: string,
+  request: StartRunRequest,
+): Promise<StartRunResult> {
   const { system } = await requireSystemAccess(deps.db, user, systemId, 'write');
   // Calibrated coefficients fitted from the user's measurements apply to every later run.
   const scenario = applyCalibration(normalisedScenario(system.scenario), system.calibration);
@@ -87,7 +103,9 @@ export async function startRun(deps: RunsDeps, user: User, systemId: string, req
   const outputIntervalS = scenario.run.outputInterval;
   await checkRunLimits(deps, user);
   // The snapshot is exactly what the worker runs: JSON round-tripped, with the duration used.
-  const snapshot: unknown = JSON.parse(JSON.stringify({ ...scenario, run: { ...scenario.run, duration: durationS } }));
+  const snapshot: unknown = JSON.parse(
+    JSON.stringify({ ...scenario, run: { ...scenario.run, duration: durationS } }),
+  );
   const row = await insertRun(deps.db, {
     systemId: system.id,
     createdBy: user.id,
@@ -102,7 +120,10 @@ export async function startRun(deps: RunsDeps, user: User, systemId: string, req
       id: row.id,
       scenario: snapshot,
       options,
-      onStart: () => void markRunRunning(deps.db, row.id).catch((error: unknown) => deps.logger.error({ err: error }, 'marking a run running failed')),
+      onStart: () =>
+        void markRunRunning(deps.db, row.id).catch((error: unknown) =>
+          deps.logger.error({ err: error }, 'marking a run running failed'),
+        ),
       onEnd: (outcome) => storeRunOutcome(deps.db, deps.logger, row, outcome, options),
     });
   } catch (error) {
@@ -114,7 +135,10 @@ export async function startRun(deps: RunsDeps, user: User, systemId: string, req
     await ended;
     return { kind: 'ended', run: await getRunOrThrow(deps, row.id) };
   }
-  return { kind: 'started', started: { id: row.id, status: 'queued', progress: deps.pool.status(row.id)?.progress ?? 0 } };
+  return {
+    kind: 'started',
+    started: { id: row.id, status: 'queued', progress: deps.pool.status(row.id)?.progress ?? 0 },
+  };
 }
 
 async function getRunOrThrow(deps: RunsDeps, runId: string): Promise<Run> {
@@ -124,7 +148,12 @@ async function getRunOrThrow(deps: RunsDeps, runId: string): Promise<Run> {
 }
 
 /** Loads a run the user may use as `need` on its system; 404 when absent or not visible. */
-export async function requireRun(db: Database, user: User, runId: string, need: SystemAccessNeed): Promise<RunRow> {
+export async function requireRun(
+  db: Database,
+  user: User,
+  runId: string,
+  need: SystemAccessNeed,
+): Promise<RunRow> {
   const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
   const row = uuid.test(runId) ? await findRun(db, runId) : undefined;
   if (!row) throw notFound('That run');
@@ -138,17 +167,32 @@ export async function requireRun(db: Database, user: User, runId: string, need: 
 }
 
 /** `GET /api/runs/:id`, with the normalised scenario snapshot when asked. */
-export async function getRun(deps: RunsDeps, user: User, runId: string, withSnapshot = false): Promise<Run | RunWithSnapshot> {
+export async function getRun(
+  deps: RunsDeps,
+  user: User,
+  runId: string,
+  withSnapshot = false,
+): Promise<Run | RunWithSnapshot> {
   const row = await requireRun(deps.db, user, runId, 'read');
   const run = toRun(row, deps.pool);
   return withSnapshot ? { ...run, scenario: row.scenario as Record<string, unknown> } : run;
 }
 
 /** `GET /api/systems/:id/runs`. */
-export async function listRuns(deps: RunsDeps, user: User, systemId: string, query: RunListQuery): Promise<RunList> {
+export async function listRuns(
+  deps: RunsDeps,
+  user: User,
+  systemId: string,
+  query: RunListQuery,
+): Promise<RunList> {
   await requireSystemAccess(deps.db, user, systemId, 'read');
   const { rows, total } = await listRunsOfSystem(deps.db, systemId, query);
-  return { items: rows.map((row) => toRunListItem(row, deps.pool)), total, page: query.page, pageSize: query.pageSize };
+  return {
+    items: rows.map((row) => toRunListItem(row, deps.pool)),
+    total,
+    page: query.page,
+    pageSize: query.pageSize,
+  };
 }
 
 /** `POST /api/runs/:id/cancel`: stops a queued or running run (partial result kept); an ended run is returned as is. */

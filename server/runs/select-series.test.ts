@@ -5,8 +5,20 @@ import { selectSeries, strideIndices } from './select-series';
 const series = {
   t_s: Float64Array.from([0, 1, 2, 3, 4, 5, 6, 7, 8, 9]),
   channels: [
-    { id: 'level:tank', kind: 'level' as const, where: 'tank', unit: 'm' as const, values: Float64Array.from([10, 11, 12, 13, 14, 15, 16, 17, 18, 19]) },
-    { id: 'flow:pump', kind: 'flow' as const, where: 'pump', unit: 'm3/s' as const, values: Float64Array.from([20, 21, 22, 23, 24, 25, 26, 27, 28, 29]) },
+    {
+      id: 'level:tank',
+      kind: 'level' as const,
+      where: 'tank',
+      unit: 'm' as const,
+      values: Float64Array.from([10, 11, 12, 13, 14, 15, 16, 17, 18, 19]),
+    },
+    {
+      id: 'flow:pump',
+      kind: 'flow' as const,
+      where: 'pump',
+      unit: 'm3/s' as const,
+      values: Float64Array.from([20, 21, 22, 23, 24, 25, 26, 27, 28, 29]),
+    },
   ],
 };
 

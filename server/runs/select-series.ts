@@ -23,18 +23,28 @@ export function strideIndices(n: number, maxPoints: number | undefined): number[
 export function selectSeries(series: DecodedSeries, selection: SeriesSelection): DecodedSeries {
   let channels = series.channels;
   if (selection.channels) {
-    const wanted = selection.channels.split(',').map((id) => id.trim()).filter(Boolean);
+    const wanted = selection.channels
+      .split(',')
+      .map((id) => id.trim())
+      .filter(Boolean);
     const unknown = wanted.filter((id) => !series.channels.some((c) => c.id === id));
     if (unknown.length > 0) {
       const known = series.channels.map((c) => c.id).join(', ');
-      throw badRequest(`Unknown series channel(s): ${unknown.join(', ')}. This run has: ${known}.`, [
-        { path: 'channels', message: `Unknown channel(s) ${unknown.join(', ')}.` },
-      ]);
+      throw badRequest(
+        `Unknown series channel(s): ${unknown.join(', ')}. This run has: ${known}.`,
+        [{ path: 'channels', message: `Unknown channel(s) ${unknown.join(', ')}.` }],
+      );
     }
-    channels = wanted.map((id) => series.channels.find((c) => c.id === id)).filter((c) => c !== undefined);
+    channels = wanted
+      .map((id) => series.channels.find((c) => c.id === id))
+      .filter((c) => c !== undefined);
   }
   const indices = strideIndices(series.t_s.length, selection.maxPoints);
   if (indices.length === series.t_s.length) return { t_s: series.t_s, channels };
-  const pick = (values: Float64Array): Float64Array => Float64Array.from(indices, (i) => values[i] ?? Number.NaN);
-  return { t_s: pick(series.t_s), channels: channels.map((c) => ({ ...c, values: pick(c.values) })) };
+  const pick = (values: Float64Array): Float64Array =>
+    Float64Array.from(indices, (i) => values[i] ?? Number.NaN);
+  return {
+    t_s: pick(series.t_s),
+    channels: channels.map((c) => ({ ...c, values: pick(c.values) })),
+  };
 }

@@ -5,8 +5,20 @@ import { decodeSeries, encodeSeries, seriesToJson } from './series-codec';
 const series = {
   t_s: [0, 5, 10, 12.345678901234567],
   channels: [
-    { id: 'level:tank', kind: 'level' as const, where: 'tank', unit: 'm' as const, values: [0.55, 0.5499999999999999, Math.PI / 7, 1e-300] },
-    { id: 'phase:bed-a', kind: 'phase' as const, where: 'bed-a', unit: '' as const, values: [0, 1, 3, Number.NaN] },
+    {
+      id: 'level:tank',
+      kind: 'level' as const,
+      where: 'tank',
+      unit: 'm' as const,
+      values: [0.55, 0.5499999999999999, Math.PI / 7, 1e-300],
+    },
+    {
+      id: 'phase:bed-a',
+      kind: 'phase' as const,
+      where: 'bed-a',
+      unit: '' as const,
+      values: [0, 1, 3, Number.NaN],
+    },
   ],
 };
 
@@ -33,7 +45,12 @@ describe('encodeSeries / decodeSeries', () => {
   });
 
   it('still reads the earlier plain-column layout', () => {
-    const header = Buffer.from(JSON.stringify({ sampleCount: 2, channels: [{ id: 'level:a', kind: 'level', where: 'a', unit: 'm' }] }));
+    const header = Buffer.from(
+      JSON.stringify({
+        sampleCount: 2,
+        channels: [{ id: 'level:a', kind: 'level', where: 'a', unit: 'm' }],
+      }),
+    );
     const dataStart = Math.ceil((8 + header.length) / 8) * 8;
     const raw = Buffer.alloc(dataStart + 32);
     raw.write('TWS1', 0, 'latin1');
@@ -48,12 +65,26 @@ describe('encodeSeries / decodeSeries', () => {
   it('compresses a long smooth series well below its raw size', () => {
     const n = 20_000;
     const t = Array.from({ length: n }, (_, i) => i * 5);
-    const long = { t_s: t, channels: [{ id: 'level:tank', kind: 'level' as const, where: 'tank', unit: 'm' as const, values: t.map(() => 0.5) }] };
+    const long = {
+      t_s: t,
+      channels: [
+        {
+          id: 'level:tank',
+          kind: 'level' as const,
+          where: 'tank',
+          unit: 'm' as const,
+          values: t.map(() => 0.5),
+        },
+      ],
+    };
     expect(encodeSeries(long).length).toBeLessThan(n * 16 * 0.5);
   });
 
   it('refuses a channel whose length differs from the sample times', () => {
-    const bad = { t_s: [0, 1], channels: [{ id: 'x', kind: 'level' as const, where: 'x', unit: 'm' as const, values: [1] }] };
+    const bad = {
+      t_s: [0, 1],
+      channels: [{ id: 'x', kind: 'level' as const, where: 'x', unit: 'm' as const, values: [1] }],
+    };
     expect(() => encodeSeries(bad)).toThrow(/1 values for 2 sample times/);
   });
 

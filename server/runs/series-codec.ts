@@ -51,7 +51,9 @@ function columnsOf(series: NumericSeries): Float64Array {
   columns.set(Array.from(series.t_s), 0);
   series.channels.forEach((channel, index) => {
     if (channel.values.length !== n) {
-      throw new Error(`Series channel ${channel.id} has ${channel.values.length} values for ${n} sample times.`);
+      throw new Error(
+        `Series channel ${channel.id} has ${channel.values.length} values for ${n} sample times.`,
+      );
     }
     columns.set(Array.from(channel.values), n * (index + 1));
   });
@@ -81,7 +83,8 @@ export function encodeSeries(series: NumericSeries): Buffer {
 export function decodeSeries(blob: Uint8Array): DecodedSeries {
   const raw = gunzipSync(blob);
   const magic = raw.toString('latin1', 0, 4);
-  if (magic !== MAGIC && magic !== PLAIN_MAGIC) throw new Error('Stored series has an unknown format.');
+  if (magic !== MAGIC && magic !== PLAIN_MAGIC)
+    throw new Error('Stored series has an unknown format.');
   const headerLength = raw.readUInt32LE(4);
   const header = HeaderSchema.parse(JSON.parse(raw.toString('utf8', 8, 8 + headerLength)));
   const dataStart = Math.ceil((8 + headerLength) / 8) * 8;

@@ -6,8 +6,20 @@ describe('seriesToCsv', () => {
     const csv = seriesToCsv({
       t_s: Float64Array.from([0, 5]),
       channels: [
-        { id: 'level:tank', kind: 'level', where: 'tank', unit: 'm', values: Float64Array.from([0.1 + 0.2, 0.5]) },
-        { id: 'phase:bed', kind: 'phase', where: 'bed', unit: '', values: Float64Array.from([0, Number.NaN]) },
+        {
+          id: 'level:tank',
+          kind: 'level',
+          where: 'tank',
+          unit: 'm',
+          values: Float64Array.from([0.1 + 0.2, 0.5]),
+        },
+        {
+          id: 'phase:bed',
+          kind: 'phase',
+          where: 'bed',
+          unit: '',
+          values: Float64Array.from([0, Number.NaN]),
+        },
       ],
     });
     expect(csv).toBe('t_s,level:tank,phase:bed\n0,0.30000000000000004,0\n5,0.5,\n');
@@ -15,7 +27,12 @@ describe('seriesToCsv', () => {
     expect(Number(row[1])).toBe(0.1 + 0.2);
   });
   it('quotes an id that holds a comma', () => {
-    const csv = seriesToCsv({ t_s: Float64Array.from([]), channels: [{ id: 'a,b', kind: 'level', where: 'a', unit: 'm', values: Float64Array.from([]) }] });
+    const csv = seriesToCsv({
+      t_s: Float64Array.from([]),
+      channels: [
+        { id: 'a,b', kind: 'level', where: 'a', unit: 'm', values: Float64Array.from([]) },
+      ],
+    });
     expect(csv).toBe('t_s,"a,b"\n');
   });
 });

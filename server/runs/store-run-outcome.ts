@@ -35,7 +35,9 @@ export async function storeRunOutcome(
       events: result?.events ?? null,
       stats,
       verdict: result ? worstVerdict(result.verdicts) : null,
-      series: outcome.series ? Buffer.from(outcome.series.buffer, outcome.series.byteOffset, outcome.series.byteLength) : null,
+      series: outcome.series
+        ? Buffer.from(outcome.series.buffer, outcome.series.byteOffset, outcome.series.byteLength)
+        : null,
     });
     if (stored && outcome.status === 'completed') await refreshLastVerdict(db, row.systemId);
   } catch (error) {

@@ -12,7 +12,14 @@ import type { VerdictStatus } from '../../shared/contracts/systems';
 import type { RunPool } from './run-pool';
 import type { RunRow } from './runs-repository';
 
-const STATUSES: readonly RunStatus[] = ['queued', 'running', 'completed', 'stopped', 'failed', 'cancelled'];
+const STATUSES: readonly RunStatus[] = [
+  'queued',
+  'running',
+  'completed',
+  'stopped',
+  'failed',
+  'cancelled',
+];
 
 const asStatus = (value: string): RunStatus => STATUSES.find((s) => s === value) ?? 'failed';
 const asVerdict = (value: string | null): VerdictStatus | null =>
@@ -26,7 +33,10 @@ export function runProgress(row: Pick<RunRow, 'id' | 'status'>, pool: RunPool | 
 
 /** Reads the numeric extras the server keeps in `stats` (sample count, mass balance). */
 function statNumber(stats: unknown, key: string): number | null {
-  const value = typeof stats === 'object' && stats !== null ? (stats as Record<string, unknown>)[key] : undefined;
+  const value =
+    typeof stats === 'object' && stats !== null
+      ? (stats as Record<string, unknown>)[key]
+      : undefined;
   return typeof value === 'number' && Number.isFinite(value) ? value : null;
 }
 
@@ -54,7 +64,10 @@ export function toRun(row: RunRow, pool: RunPool | undefined): Run {
 }
 
 /** A row of the runs table. */
-export function toRunListItem(row: RunRow & { createdByName: string | null }, pool: RunPool | undefined): RunListItem {
+export function toRunListItem(
+  row: RunRow & { createdByName: string | null },
+  pool: RunPool | undefined,
+): RunListItem {
   return {
     id: row.id,
     status: asStatus(row.status),

@@ -4,8 +4,11 @@ import type { VerdictStatus } from '../../shared/contracts/systems';
 const RANK: Record<VerdictStatus, number> = { ok: 0, warning: 1, fails: 2 };
 
 /** `fails` beats `warning` beats `ok`; null for no verdicts. */
-export function worstVerdict(verdicts: ReadonlyArray<{ status: VerdictStatus }>): VerdictStatus | null {
+export function worstVerdict(
+  verdicts: ReadonlyArray<{ status: VerdictStatus }>,
+): VerdictStatus | null {
   let worst: VerdictStatus | null = null;
-  for (const { status } of verdicts) if (worst === null || RANK[status] > RANK[worst]) worst = status;
+  for (const { status } of verdicts)
+    if (worst === null || RANK[status] > RANK[worst]) worst = status;
   return worst;
 }

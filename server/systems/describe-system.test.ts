@@ -20,7 +20,12 @@ describe('describeSystem', () => {
     expect(figures.pumpSummary).toBe('2 pumps, up to 2800 L/h in all');
   });
   it('says "No pump" and tolerates a document of another shape', () => {
-    expect(describeSystem({ vessels: [] })).toEqual({ bedsCount: 0, pumpsCount: 0, pumpSummary: 'No pump', pumpsMaxFlowM3PerS: null });
+    expect(describeSystem({ vessels: [] })).toEqual({
+      bedsCount: 0,
+      pumpsCount: 0,
+      pumpSummary: 'No pump',
+      pumpsMaxFlowM3PerS: null,
+    });
     expect(describeSystem('not an object').bedsCount).toBe(0);
   });
 });

@@ -20,7 +20,10 @@ const field = (value: unknown, key: string): unknown =>
 
 /** A pump's largest flow, m³/s: `maxFlow`, else the largest curve point's flow. */
 function pumpMaxFlowM3PerS(pump: unknown): number | null {
-  const candidates = [field(pump, 'maxFlow'), ...asArray(field(pump, 'curve')).map((p) => field(p, 'flow'))];
+  const candidates = [
+    field(pump, 'maxFlow'),
+    ...asArray(field(pump, 'curve')).map((p) => field(p, 'flow')),
+  ];
   let best: number | null = null;
   for (const value of candidates) {
     if (value === undefined) continue;
@@ -32,7 +35,9 @@ function pumpMaxFlowM3PerS(pump: unknown): number | null {
 
 /** Counts beds and pumps and sums the pumps' maximum flows. */
 export function describeSystem(scenario: unknown): SystemFigures {
-  const bedsCount = asArray(field(scenario, 'vessels')).filter((v) => field(v, 'kind') === 'bed').length;
+  const bedsCount = asArray(field(scenario, 'vessels')).filter(
+    (v) => field(v, 'kind') === 'bed',
+  ).length;
   const pumps = asArray(field(scenario, 'pumps'));
   const flows = pumps.map(pumpMaxFlowM3PerS).filter((q): q is number => q !== null);
   const total = flows.length > 0 ? flows.reduce((a, b) => a + b, 0) : null;

@@ -24,14 +24,26 @@ describe('seedDemoSystems', () => {
         .from(systems)
         .innerJoin(users, eq(users.id, systems.ownerId))
         .where(eq(users.email, account.email));
-      expect(rows.map((r) => r.name).sort()).toEqual(['Classroom tabletop unit', 'Community greenhouse: 500 L tank, sump and three beds']);
+      expect(rows.map((r) => r.name).sort()).toEqual([
+        'Classroom tabletop unit',
+        'Community greenhouse: 500 L tank, sump and three beds',
+      ]);
       for (const row of rows) {
         const parsed = parseScenario(row.scenario);
         expect(parsed.success).toBe(true);
         expect(row.version).toBe(1);
       }
     }
-    const greenhouse = parseScenario((await t.ctx.db.select().from(systems).where(eq(systems.name, 'Community greenhouse: 500 L tank, sump and three beds')))[0]?.scenario);
-    expect(greenhouse.success && greenhouse.scenario.vessels.filter((v) => v.kind === 'bed')).toHaveLength(3);
+    const greenhouse = parseScenario(
+      (
+        await t.ctx.db
+          .select()
+          .from(systems)
+          .where(eq(systems.name, 'Community greenhouse: 500 L tank, sump and three beds'))
+      )[0]?.scenario,
+    );
+    expect(
+      greenhouse.success && greenhouse.scenario.vessels.filter((v) => v.kind === 'bed'),
+    ).toHaveLength(3);
   });
 });

@@ -16,7 +16,11 @@ async function giveSystem(db: Database, ownerId: string, fileName: string): Prom
   const document = readExampleScenario(fileName);
   const name = typeof document['name'] === 'string' ? document['name'] : fileName;
   if (await findOwnedSystemByName(db, ownerId, name)) return;
-  await insertSystem(db, { ownerId, name, scenario: checkScenarioDocument(document, name, `scenarios/${fileName}`) });
+  await insertSystem(db, {
+    ownerId,
+    name,
+    scenario: checkScenarioDocument(document, name, `scenarios/${fileName}`),
+  });
 }
 
 /** Gives each demo account the demo systems it does not have yet. */

@@ -4,7 +4,13 @@ import type { SessionUser } from '../auth/session-user';
 import { requireSystemAccess } from '../auth/system-access';
 import type { Database } from '../db/database';
 import { badRequest, HttpError, notFound } from '../http/http-error';
-import { deleteShare, findUserByEmail, listShares, upsertShare, type ShareRow } from './systems-repository';
+import {
+  deleteShare,
+  findUserByEmail,
+  listShares,
+  upsertShare,
+  type ShareRow,
+} from './systems-repository';
 
 type User = Pick<SessionUser, 'id'>;
 
@@ -17,19 +23,31 @@ const toShare = (row: ShareRow): Share => ({
 });
 
 /** `GET /api/systems/:id/shares`. */
-export async function listSystemShares(db: Database, user: User, systemId: string): Promise<ShareList> {
+export async function listSystemShares(
+  db: Database,
+  user: User,
+  systemId: string,
+): Promise<ShareList> {
   await requireSystemAccess(db, user, systemId, 'owner');
   return { items: (await listShares(db, systemId)).map(toShare) };
 }
 
 /** `POST /api/systems/:id/shares`: shares with the account of `email`, or changes its access. */
-export async function shareSystem(db: Database, user: User, systemId: string, request: ShareRequest): Promise<Share> {
+export async function shareSystem(
+  db: Database,
+  user: User,
+  systemId: string,
+  request: ShareRequest,
+): Promise<Share> {
   const { system } = await requireSystemAccess(db, user, systemId, 'owner');
   const target = await findUserByEmail(db, request.email);
   if (!target) {
-    throw new HttpError(404, 'USER_NOT_FOUND', 'No Tidewright account uses that e-mail address; ask them to register first.', [
-      { path: 'email', message: 'No account uses this address.' },
-    ]);
+    throw new HttpError(
+      404,
+      'USER_NOT_FOUND',
+      'No Tidewright account uses that e-mail address; ask them to register first.',
+      [{ path: 'email', message: 'No account uses this address.' }],
+    );
   }
   if (target.id === system.ownerId) {
     throw badRequest('You own this system already; share it with someone else.', [
@@ -43,8 +61,14 @@ export async function shareSystem(db: Database, user: User, systemId: string, re
 }
 
 /** `DELETE /api/systems/:id/shares/:userId`. */
-export async function unshareSystem(db: Database, user: User, systemId: string, userId: string): Promise<void> {
+export async function unshareSystem(
+  db: Database,
+  user: User,
+  systemId: string,
+  userId: string,
+): Promise<void> {
   const { system } = await requireSystemAccess(db, user, systemId, 'owner');
   const uuid = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
-  if (!uuid.test(userId) || !(await deleteShare(db, system.id, userId))) throw notFound('That share');
+  if (!uuid.test(userId) || !(await deleteShare(db, system.id, userId)))
+    throw notFound('That share');
 }

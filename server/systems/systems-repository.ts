@@ -19,7 +19,10 @@ export async function listSystemsForUser(db: Database, userId: string): Promise<
     .select({ system: systems, ownerName: users.name, shareAccess: systemShares.access })
     .from(systems)
     .innerJoin(users, eq(users.id, systems.ownerId))
-    .leftJoin(systemShares, and(eq(systemShares.systemId, systems.id), eq(systemShares.userId, userId)))
+    .leftJoin(
+      systemShares,
+      and(eq(systemShares.systemId, systems.id), eq(systemShares.userId, userId)),
+    )
     .where(or(eq(systems.ownerId, userId), eq(systemShares.userId, userId)))
     .orderBy(desc(systems.updatedAt), desc(systems.id));
 }
@@ -31,7 +34,12 @@ export async function insertSystem(
 ): Promise<SystemRow> {
   const [row] = await db
     .insert(systems)
-    .values({ ownerId: values.ownerId, name: values.name, scenario: values.scenario, calibration: values.calibration ?? null })
+    .values({
+      ownerId: values.ownerId,
+      name: values.name,
+      scenario: values.scenario,
+      calibration: values.calibration ?? null,
+    })
     .returning();
   if (!row) throw new Error('Inserting a system returned no row.');
   return row;
@@ -49,7 +57,12 @@ export async function updateSystemIfVersion(
 ): Promise<SystemRow | undefined> {
   const [row] = await db
     .update(systems)
-    .set({ name: values.name, scenario: values.scenario, version: sql`${systems.version} + 1`, updatedAt: sql`now()` })
+    .set({
+      name: values.name,
+      scenario: values.scenario,
+      version: sql`${systems.version} + 1`,
+      updatedAt: sql`now()`,
+    })
     .where(and(eq(systems.id, id), eq(systems.version, expectedVersion)))
     .returning();
   return row;
@@ -61,7 +74,11 @@ export async function deleteSystemRow(db: Database, id: string): Promise<void> {
 }
 
 /** The stored `last_verdict` of a system. */
-export async function setLastVerdict(db: Database, systemId: string, verdict: string | null): Promise<void> {
+export async function setLastVerdict(
+  db: Database,
+  systemId: string,
+  verdict: string | null,
+): Promise<void> {
   await db.update(systems).set({ lastVerdict: verdict }).where(eq(systems.id, systemId));
 }
 
@@ -84,7 +101,11 @@ export async function findUserByEmail(
 }
 
 /** The id of a system owned by `ownerId` with exactly this name, if any. */
-export async function findOwnedSystemByName(db: Database, ownerId: string, name: string): Promise<string | undefined> {
+export async function findOwnedSystemByName(
+  db: Database,
+  ownerId: string,
+  name: string,
+): Promise<string | undefined> {
   const [row] = await db
     .select({ id: systems.id })
     .from(systems)
@@ -118,7 +139,12 @@ export async function listShares(db: Database, systemId: string): Promise<ShareR
 }
 
 /** Shares a system with a user, or changes the access of an existing share. */
-export async function upsertShare(db: Database, systemId: string, userId: string, access: string): Promise<void> {
+export async function upsertShare(
+  db: Database,
+  systemId: string,
+  userId: string,
+  access: string,
+): Promise<void> {
   await db
     .insert(systemShares)
     .values({ systemId, userId, access })
@@ -126,7 +152,11 @@ export async function upsertShare(db: Database, systemId: string, userId: string
 }
 
 /** Removes a share; returns whether one existed. */
-export async function deleteShare(db: Database, systemId: string, userId: string): Promise<boolean> {
+export async function deleteShare(
+  db: Database,
+  systemId: string,
+  userId: string,
+): Promise<boolean> {
   const deleted = await db
     .delete(systemShares)
     .where(and(eq(systemShares.systemId, systemId), eq(systemShares.userId, userId)))

@@ -40,7 +40,9 @@ export function systemsRouter(ctx: AppContext): Router {
   router.post('/systems', async (req, res) => {
     const body: unknown = req.body;
     const isTemplate = typeof body === 'object' && body !== null && 'template' in body;
-    const request = isTemplate ? parseOr400(CreateSystemFromTemplateSchema, body) : parseOr400(CreateSystemFromScenarioSchema, body);
+    const request = isTemplate
+      ? parseOr400(CreateSystemFromTemplateSchema, body)
+      : parseOr400(CreateSystemFromScenarioSchema, body);
     const system = await createSystem(db, currentUser(req), request);
     res.status(201).location(`/api/systems/${system.id}`).json(system);
   });
@@ -68,8 +70,15 @@ export function systemsRouter(ctx: AppContext): Router {
     res.status(201).location(`/api/systems/${system.id}`).json(system);
   });
   router.get('/systems/:systemId/scenario.json', async (req, res) => {
-    const { fileName, document } = await exportSystemScenario(db, currentUser(req), param(req, 'systemId'));
-    res.attachment(fileName).type('application/json').send(`${JSON.stringify(document, null, 2)}\n`);
+    const { fileName, document } = await exportSystemScenario(
+      db,
+      currentUser(req),
+      param(req, 'systemId'),
+    );
+    res
+      .attachment(fileName)
+      .type('application/json')
+      .send(`${JSON.stringify(document, null, 2)}\n`);
   });
   router.get('/systems/:systemId/shares', async (req, res) => {
     res.json(await listSystemShares(db, currentUser(req), param(req, 'systemId')));

@@ -32,7 +32,9 @@ const asVerdict = (value: string | null): VerdictStatus | null =>
   value === 'ok' || value === 'warning' || value === 'fails' ? value : null;
 
 const asDocument = (value: unknown): Record<string, unknown> =>
-  typeof value === 'object' && value !== null && !Array.isArray(value) ? (value as Record<string, unknown>) : {};
+  typeof value === 'object' && value !== null && !Array.isArray(value)
+    ? (value as Record<string, unknown>)
+    : {};
 
 /** The API form of a system row. */
 export function toSystem(row: SystemRow, access: SystemAccessLevel, ownerName: string): System {
@@ -56,7 +58,11 @@ export function toSystem(row: SystemRow, access: SystemAccessLevel, ownerName: s
  * its field path, under `prefix` (e.g. "scenario") when the document is nested in the body.
  * With `name`, the document's `name` is set to it first; the checked document is returned.
  */
-export function checkScenarioDocument(document: unknown, name: string | undefined, prefix: string): Record<string, unknown> {
+export function checkScenarioDocument(
+  document: unknown,
+  name: string | undefined,
+  prefix: string,
+): Record<string, unknown> {
   if (typeof document !== 'object' || document === null || Array.isArray(document)) {
     throw badRequest('The scenario must be a JSON object in the scenario/1 format.', [
       { path: prefix || '(body)', message: 'Expected a JSON object.' },
@@ -69,8 +75,14 @@ export function checkScenarioDocument(document: unknown, name: string | undefine
     path: prefix ? (issue.path ? `${prefix}.${issue.path}` : prefix) : issue.path || '(body)',
     message: issue.message,
   }));
-  const list = fields.slice(0, 5).map((f) => f.path).join(', ');
-  throw badRequest(`The scenario has ${fields.length} problem(s): ${list}${fields.length > 5 ? ', …' : ''}.`, fields);
+  const list = fields
+    .slice(0, 5)
+    .map((f) => f.path)
+    .join(', ');
+  throw badRequest(
+    `The scenario has ${fields.length} problem(s): ${list}${fields.length > 5 ? ', …' : ''}.`,
+    fields,
+  );
 }
 
 /** `GET /api/systems`: the user's own systems, then those shared with them. */
@@ -82,7 +94,12 @@ export async function listSystems(db: Database, user: User): Promise<SystemList>
     ...describeSystem(system.scenario),
     lastVerdict: asVerdict(system.lastVerdict),
     ownerName,
-    access: system.ownerId === user.id ? ('owner' as const) : shareAccess === 'editor' ? ('editor' as const) : ('viewer' as const),
+    access:
+      system.ownerId === user.id
+        ? ('owner' as const)
+        : shareAccess === 'editor'
+          ? ('editor' as const)
+          : ('viewer' as const),
     updatedAt: system.updatedAt.toISOString(),
   }));
   const rank = (access: SystemAccessLevel): number => (access === 'owner' ? 0 : 1);
@@ -111,9 +128,19 @@ export async function createSystemFromDocument(
 }
 
 /** `POST /api/systems`: from a scenario document or a template. */
-export async function createSystem(db: Database, user: User, request: CreateSystemRequest): Promise<System> {
+export async function createSystem(
+  db: Database,
+  user: User,
+  request: CreateSystemRequest,
+): Promise<System> {
   if ('template' in request) {
-    return createSystemFromDocument(db, user, request.name, templateScenario(request.template), 'template');
+    return createSystemFromDocument(
+      db,
+      user,
+      request.name,
+      templateScenario(request.template),
+      'template',
+    );
   }
   return createSystemFromDocument(db, user, request.name, request.scenario, 'scenario');
 }
@@ -122,7 +149,12 @@ export async function createSystem(db: Database, user: User, request: CreateSyst
  * `POST /api/systems/import`: the body is a scenario file, checked as it is (errors name paths in
  * the file); the system takes the file's name unless `name` is given.
  */
-export async function importSystem(db: Database, user: User, file: unknown, name?: string): Promise<System> {
+export async function importSystem(
+  db: Database,
+  user: User,
+  file: unknown,
+  name?: string,
+): Promise<System> {
   const checked = checkScenarioDocument(file, undefined, '');
   const fileName = checked['name'];
   const chosen = name ?? (typeof fileName === 'string' ? fileName.trim().slice(0, 200) : '');
@@ -130,7 +162,12 @@ export async function importSystem(db: Database, user: User, file: unknown, name
 }
 
 /** `PUT /api/systems/:id`: saves if `request.version` is current, else 409 `STALE_VERSION`. */
-export async function updateSystem(db: Database, user: User, systemId: string, request: UpdateSystemRequest): Promise<System> {
+export async function updateSystem(
+  db: Database,
+  user: User,
+  systemId: string,
+  request: UpdateSystemRequest,
+): Promise<System> {
   const { system, access } = await requireSystemAccess(db, user, systemId, 'write');
   const name = request.name ?? system.name;
   const scenario = checkScenarioDocument(request.scenario ?? system.scenario, name, 'scenario');
@@ -146,10 +183,22 @@ export async function updateSystem(db: Database, user: User, systemId: string, r
 }
 
 /** `POST /api/systems/:id/duplicate`: a copy owned by `user` (scenario and calibration, no runs or shares). */
-export async function duplicateSystem(db: Database, user: User, systemId: string, name?: string): Promise<System> {
+export async function duplicateSystem(
+  db: Database,
+  user: User,
+  systemId: string,
+  name?: string,
+): Promise<System> {
   const { system } = await requireSystemAccess(db, user, systemId, 'read');
   const copyName = name ?? `${system.name} (copy)`.slice(0, 200);
-  return createSystemFromDocument(db, user, copyName, system.scenario, 'scenario', system.calibration);
+  return createSystemFromDocument(
+    db,
+    user,
+    copyName,
+    system.scenario,
+    'scenario',
+    system.calibration,
+  );
 }
 
 /** `GET /api/systems/:id/scenario.json`: the scenario document and a file name for it. */
@@ -159,7 +208,11 @@ export async function exportSystemScenario(
   systemId: string,
 ): Promise<{ fileName: string; document: Record<string, unknown> }> {
   const { system } = await requireSystemAccess(db, user, systemId, 'read');
-  const slug = system.name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '') || 'system';
+  const slug =
+    system.name
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-+|-+$/g, '') || 'system';
   return { fileName: `${slug}.scenario.json`, document: asDocument(system.scenario) };
 }
 

@@ -19,7 +19,14 @@ export const RUN_SYNC_MAX_DURATION_S = 24 * 3600;
  * its own, e.g. a sample limit; partial result kept), `failed` (numerical failure, time limit or
  * internal error; `error` says why) or `cancelled` (someone cancelled; partial result kept).
  */
-export const RunStatusSchema = z.enum(['queued', 'running', 'completed', 'stopped', 'failed', 'cancelled']);
+export const RunStatusSchema = z.enum([
+  'queued',
+  'running',
+  'completed',
+  'stopped',
+  'failed',
+  'cancelled',
+]);
 /** A run's status. */
 export type RunStatus = z.infer<typeof RunStatusSchema>;
 
@@ -164,7 +171,9 @@ export type RunStarted = z.infer<typeof RunStartedSchema>;
 export const RunGetQuerySchema = z.object({ snapshot: z.enum(['0', '1']).optional() });
 
 /** `GET /api/runs/:id?snapshot=1` adds the normalised scenario the run used (all SI, defaults filled). */
-export const RunWithSnapshotSchema = RunSchema.extend({ scenario: z.record(z.string(), z.unknown()) });
+export const RunWithSnapshotSchema = RunSchema.extend({
+  scenario: z.record(z.string(), z.unknown()),
+});
 /** A run with its normalised scenario snapshot. */
 export type RunWithSnapshot = z.infer<typeof RunWithSnapshotSchema>;
 
@@ -294,7 +303,14 @@ export const RunComparisonSchema = z.object({
   a: CompareSideSchema,
   b: CompareSideSchema,
   beds: z.array(CompareRowSchema),
-  bedStates: z.array(z.object({ where: z.string(), a: z.string().nullable(), b: z.string().nullable(), changed: z.boolean() })),
+  bedStates: z.array(
+    z.object({
+      where: z.string(),
+      a: z.string().nullable(),
+      b: z.string().nullable(),
+      changed: z.boolean(),
+    }),
+  ),
   vessels: z.array(CompareRowSchema),
   pumps: z.array(CompareRowSchema),
   verdicts: z.array(VerdictChangeSchema),

@@ -4,9 +4,21 @@
  */
 import { afterEach, describe, expect, it } from 'vitest';
 import { ApiErrorSchema } from '../../shared/contracts/api-error';
-import { RunComparisonSchema, RunListSchema, RunSchema, RunStartedSchema } from '../../shared/contracts/runs';
+import {
+  RunComparisonSchema,
+  RunListSchema,
+  RunSchema,
+  RunStartedSchema,
+} from '../../shared/contracts/runs';
 import { signedInClient } from '../../server/testing/test-client';
-import { createRunsWorld, createSystem, exampleScenario, pollRun, runSystem, type RunsWorld } from './runs-support';
+import {
+  createRunsWorld,
+  createSystem,
+  exampleScenario,
+  pollRun,
+  runSystem,
+  type RunsWorld,
+} from './runs-support';
 
 describe('runs across users and limits', () => {
   let w: RunsWorld;
@@ -35,12 +47,25 @@ describe('runs across users and limits', () => {
     expect(period?.b).toBe(b.summary?.beds[0]?.periodMean_s);
     expect(period?.changed).toBe(true);
     expect(period?.delta).toBeCloseTo((period?.b ?? 0) - (period?.a ?? 0), 9);
-    expect(table.beds.map((r) => r.metric)).toEqual(['cycles', 'periodMean_s', 'floodMean_s', 'drainMean_s', 'highLevel_m', 'lowLevel_m']);
+    expect(table.beds.map((r) => r.metric)).toEqual([
+      'cycles',
+      'periodMean_s',
+      'floodMean_s',
+      'drainMean_s',
+      'highLevel_m',
+      'lowLevel_m',
+    ]);
     const tankMin = table.vessels.find((r) => r.where === 'tank' && r.metric === 'minLevel_m');
     expect(tankMin?.a).toBe(a.summary?.vessels.find((v) => v.id === 'tank')?.minLevel_m);
     expect(table.verdicts.some((v) => v.changed && v.a === 'ok' && v.b === 'fails')).toBe(true);
-    const same = RunComparisonSchema.parse((await w.owner.get(`/api/runs/compare?a=${a.id}&b=${a.id}`)).body);
-    expect([...same.beds, ...same.vessels, ...same.pumps].every((r) => !r.changed && (r.delta === null || r.delta === 0))).toBe(true);
+    const same = RunComparisonSchema.parse(
+      (await w.owner.get(`/api/runs/compare?a=${a.id}&b=${a.id}`)).body,
+    );
+    expect(
+      [...same.beds, ...same.vessels, ...same.pumps].every(
+        (r) => !r.changed && (r.delta === null || r.delta === 0),
+      ),
+    ).toBe(true);
     const bad = await w.owner.get(`/api/runs/compare?a=${a.id}`);
     expect(ApiErrorSchema.parse(bad.body).error.fields?.map((f) => f.path)).toEqual(['b']);
   });
@@ -50,9 +75,13 @@ describe('runs across users and limits', () => {
     const system = await createSystem(w.owner);
     const run = await runSystem(w.owner, system.id, { duration: '10 min' });
     const viewer = await signedInClient(w.app, w.t.ctx, { name: 'Vic Viewer' });
-    await w.owner.post(`/api/systems/${system.id}/shares`).send({ email: viewer.user.email, access: 'viewer' });
+    await w.owner
+      .post(`/api/systems/${system.id}/shares`)
+      .send({ email: viewer.user.email, access: 'viewer' });
     expect(RunSchema.parse((await viewer.client.get(`/api/runs/${run.id}`)).body).id).toBe(run.id);
-    expect(RunListSchema.parse((await viewer.client.get(`/api/systems/${system.id}/runs`)).body).total).toBe(1);
+    expect(
+      RunListSchema.parse((await viewer.client.get(`/api/systems/${system.id}/runs`)).body).total,
+    ).toBe(1);
     expect((await viewer.client.get(`/api/runs/compare?a=${run.id}&b=${run.id}`)).status).toBe(200);
     const start = await viewer.client.post(`/api/systems/${system.id}/runs`).send({});
     expect(start.status).toBe(403);
@@ -60,7 +89,12 @@ describe('runs across users and limits', () => {
     expect((await viewer.client.delete(`/api/runs/${run.id}`)).status).toBe(403);
     expect((await viewer.client.post(`/api/runs/${run.id}/cancel`)).status).toBe(403);
     const stranger = await signedInClient(w.app, w.t.ctx, { name: 'Stan Stranger' });
-    for (const path of [`/api/runs/${run.id}`, `/api/runs/${run.id}/series`, `/api/runs/${run.id}/series.csv`, `/api/runs/compare?a=${run.id}&b=${run.id}`]) {
+    for (const path of [
+      `/api/runs/${run.id}`,
+      `/api/runs/${run.id}/series`,
+      `/api/runs/${run.id}/series.csv`,
+      `/api/runs/compare?a=${run.id}&b=${run.id}`,
+    ]) {
       expect((await stranger.client.get(path)).status, path).toBe(404);
     }
     expect((await w.owner.get('/api/runs/not-a-uuid')).status).toBe(404);
@@ -71,8 +105,14 @@ describe('runs across users and limits', () => {
     // own stop (with its partial result) come before the pool's hard kill.
     w = await createRunsWorld({ timeLimitMs: 5, graceMs: 60_000 });
     const system = await createSystem(w.owner);
-    const started = RunStartedSchema.parse((await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: '30 days' })).body);
-    const run = await pollRun(w.owner, started.id, (r) => r.status !== 'queued' && r.status !== 'running');
+    const started = RunStartedSchema.parse(
+      (await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: '30 days' })).body,
+    );
+    const run = await pollRun(
+      w.owner,
+      started.id,
+      (r) => r.status !== 'queued' && r.status !== 'running',
+    );
     expect(run.status).toBe('failed');
     expect(run.error).toMatch(/5 ms time limit/);
     expect(run.error).toMatch(/shorten the duration/);
@@ -83,18 +123,32 @@ describe('runs across users and limits', () => {
   it('refuses a run beyond the per-user limit of runs going at once with 429', async () => {
     w = await createRunsWorld({ maxActivePerUser: 1 });
     const system = await createSystem(w.owner);
-    const first = RunStartedSchema.parse((await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: '30 days', async: true })).body);
+    const first = RunStartedSchema.parse(
+      (
+        await w.owner
+          .post(`/api/systems/${system.id}/runs`)
+          .send({ duration: '30 days', async: true })
+      ).body,
+    );
     const second = await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: 60 });
     expect(second.status).toBe(429);
     expect(ApiErrorSchema.parse(second.body).error.code).toBe('TOO_MANY_RUNS');
     await w.owner.post(`/api/runs/${first.id}/cancel`);
-    expect((await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: 60 })).status).toBe(201);
+    expect(
+      (await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: 60 })).status,
+    ).toBe(201);
   });
 
   it('cancels the runs of a system that is deleted while they are going', async () => {
     w = await createRunsWorld();
     const system = await createSystem(w.owner);
-    const started = RunStartedSchema.parse((await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: '30 days', async: true })).body);
+    const started = RunStartedSchema.parse(
+      (
+        await w.owner
+          .post(`/api/systems/${system.id}/runs`)
+          .send({ duration: '30 days', async: true })
+      ).body,
+    );
     await pollRun(w.owner, started.id, (r) => r.status === 'running');
     expect((await w.owner.delete(`/api/systems/${system.id}`)).status).toBe(204);
     expect(w.pool.status(started.id)).toBeUndefined();

@@ -41,33 +41,49 @@ export async function createRunsWorld(pool: Partial<RunPoolOptions> = {}): Promi
 }
 
 /** The example scenario file (one bed, one pump, a 670 L tank), optionally changed. */
-export function exampleScenario(change: (s: Record<string, unknown>) => void = () => {}): Record<string, unknown> {
+export function exampleScenario(
+  change: (s: Record<string, unknown>) => void = () => {},
+): Record<string, unknown> {
   const scenario = structuredClone(EXAMPLE_SCENARIO_FILE) as Record<string, unknown>;
   change(scenario);
   return scenario;
 }
 
 /** Creates a system as `client`. */
-export async function createSystem(client: TestClient, scenario = exampleScenario(), name = 'One bed'): Promise<System> {
+export async function createSystem(
+  client: TestClient,
+  scenario = exampleScenario(),
+  name = 'One bed',
+): Promise<System> {
   const res = await client.post('/api/systems').send({ name, scenario });
   expect(res.status, JSON.stringify(res.body)).toBe(201);
   return SystemSchema.parse(res.body);
 }
 
 /** Runs a system synchronously (201) and returns the ended run. */
-export async function runSystem(client: TestClient, systemId: string, body: object = { duration: '30 min' }): Promise<Run> {
+export async function runSystem(
+  client: TestClient,
+  systemId: string,
+  body: object = { duration: '30 min' },
+): Promise<Run> {
   const res = await client.post(`/api/systems/${systemId}/runs`).send(body);
   expect(res.status, JSON.stringify(res.body)).toBe(201);
   return RunSchema.parse(res.body);
 }
 
 /** Polls `GET /api/runs/:id` until `done(run)`; returns that run. */
-export async function pollRun(client: TestClient, runId: string, done: (run: Run) => boolean, timeoutMs = 60_000): Promise<Run> {
+export async function pollRun(
+  client: TestClient,
+  runId: string,
+  done: (run: Run) => boolean,
+  timeoutMs = 60_000,
+): Promise<Run> {
   const end = Date.now() + timeoutMs;
   for (;;) {
     const run = RunSchema.parse((await client.get(`/api/runs/${runId}`)).body);
     if (done(run)) return run;
-    if (Date.now() > end) throw new Error(`Run ${runId} still ${run.status} after ${timeoutMs} ms.`);
+    if (Date.now() > end)
+      throw new Error(`Run ${runId} still ${run.status} after ${timeoutMs} ms.`);
     await new Promise((r) => setTimeout(r, 50));
   }
 }

@@ -15,7 +15,8 @@ const schedule = Array.from({ length: HOURS }, (_, hour) => [
 export const TIMER_BED_TEMPLATE: ScenarioFile = {
   format: 'scenario/1',
   name: 'Timer-flooded bed',
-  description: 'A pump on a timer floods one gravel bed; a standpipe caps the level and a weep hole drains it.',
+  description:
+    'A pump on a timer floods one gravel bed; a standpipe caps the level and a weep hole drains it.',
   water: { temperature: '22 degC' },
   vessels: [
     {
@@ -41,7 +42,12 @@ export const TIMER_BED_TEMPLATE: ScenarioFile = {
         to: 'tank',
         standpipe: { innerDiameter: '20.9 mm', outerDiameter: '26.7 mm', height: '0.22 m' },
         weepHole: { diameter: '5 mm' },
-        pipe: { length: '0.6 m', innerDiameter: '20.9 mm', material: 'pvc', fittings: { elbow90: 1 } },
+        pipe: {
+          length: '0.6 m',
+          innerDiameter: '20.9 mm',
+          material: 'pvc',
+          fittings: { elbow90: 1 },
+        },
         outletElevation: '0.65 m',
       },
     },
@@ -59,7 +65,12 @@ export const TIMER_BED_TEMPLATE: ScenarioFile = {
         {
           to: 'bed',
           elevation: '1.15 m',
-          pipe: { length: '1.0 m', innerDiameter: '15.8 mm', material: 'pvc', fittings: { elbow90: 2 } },
+          pipe: {
+            length: '1.0 m',
+            innerDiameter: '15.8 mm',
+            material: 'pvc',
+            fittings: { elbow90: 2 },
+          },
         },
       ],
     },

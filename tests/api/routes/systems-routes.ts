@@ -19,9 +19,27 @@ export const systemsRoutes: RouteGroup = {
   },
   routes: [
     { method: 'get', path: '/api/systems', access: 'signed-in', okStatus: 200 },
-    { method: 'post', path: '/api/systems', access: 'signed-in', body: () => ({ template: 'blank', name: 'Bench rig' }), okStatus: 201 },
-    { method: 'post', path: '/api/systems/import', access: 'signed-in', body: () => EXAMPLE_SCENARIO_FILE, okStatus: 201 },
-    { method: 'get', path: '/api/systems/:systemId', access: 'signed-in', ownership: { need: 'read', shareable: true }, okStatus: 200 },
+    {
+      method: 'post',
+      path: '/api/systems',
+      access: 'signed-in',
+      body: () => ({ template: 'blank', name: 'Bench rig' }),
+      okStatus: 201,
+    },
+    {
+      method: 'post',
+      path: '/api/systems/import',
+      access: 'signed-in',
+      body: () => EXAMPLE_SCENARIO_FILE,
+      okStatus: 201,
+    },
+    {
+      method: 'get',
+      path: '/api/systems/:systemId',
+      access: 'signed-in',
+      ownership: { need: 'read', shareable: true },
+      okStatus: 200,
+    },
     {
       method: 'put',
       path: '/api/systems/:systemId',
@@ -30,7 +48,13 @@ export const systemsRoutes: RouteGroup = {
       body: () => ({ version: 1, name: 'Renamed system' }),
       okStatus: 200,
     },
-    { method: 'delete', path: '/api/systems/:systemId', access: 'signed-in', ownership: { need: 'owner', shareable: true }, okStatus: 204 },
+    {
+      method: 'delete',
+      path: '/api/systems/:systemId',
+      access: 'signed-in',
+      ownership: { need: 'owner', shareable: true },
+      okStatus: 204,
+    },
     {
       method: 'post',
       path: '/api/systems/:systemId/duplicate',
