@@ -8,6 +8,8 @@ const sig = (value: number, digits = 3): string =>
 export const litres = (m3: number): string => `${sig(m3 * 1000)} L`;
 /** A length in m as metres. */
 export const metres = (m: number): string => `${sig(m)} m`;
+/** A small length in m (a hole, a bore) as millimetres. */
+export const millimetres = (m: number): string => `${sig(m * 1000)} mm`;
 /** A time in s as minutes (seconds under a minute). */
 export const minutes = (s: number): string => (s < 60 ? `${sig(s)} s` : `${sig(s / 60)} min`);
 /** A mass in kg. */

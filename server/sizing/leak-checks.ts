@@ -2,7 +2,7 @@
 import type { SizingCheck } from '../../shared/contracts/sizing';
 import type { Pump, Scenario, Vessel } from '../../shared/scenario/index';
 import type { RunResultParts } from '../runs/run-worker-messages';
-import { metres, minutes, sizingCheck } from './check-words';
+import { metres, millimetres, minutes, sizingCheck } from './check-words';
 import { withLeak } from './what-if-scenarios';
 
 /** The leak opens this long into the run, s. */
@@ -83,7 +83,7 @@ export function leakCheck(leak: LeakCase, run: RunResultParts): SizingCheck {
       unit: 'm',
       source: 'the fish-safe minimum level of the system',
       detail:
-        `A break in pump ${leak.pump.id}'s line (a hole the size of its ${metres(leak.diameterM)} bore at the intake, ${metres(leak.pump.intakeHeight)}) takes ${vessel.id} down to ${metres(lowest)}${when}; its fish-safe minimum is ${metres(vessel.minLevel)}.` +
+        `A break in pump ${leak.pump.id}'s line (a hole the size of its ${millimetres(leak.diameterM)} bore at the intake, ${metres(leak.pump.intakeHeight)}) takes ${vessel.id} down to ${metres(lowest)}${when}; its fish-safe minimum is ${metres(vessel.minLevel)}.` +
         (below
           ? ' Raise the intake above the minimum, or drill an anti-siphon hole in the line just below the minimum level (common practice, no source).'
           : ''),
@@ -92,7 +92,7 @@ export function leakCheck(leak: LeakCase, run: RunResultParts): SizingCheck {
   return sizingCheck({
     check: 'tank-leak-time',
     subject: vessel.id,
-    title: `A ${metres(leak.diameterM)} hole at the floor of ${vessel.id}`,
+    title: `A ${millimetres(leak.diameterM)} hole at the floor of ${vessel.id}`,
     status: reachedS !== null && reachedS < LEAK_RESPONSE_S ? 'warning' : 'ok',
     value: reachedS,
     limit: LEAK_RESPONSE_S,
@@ -100,7 +100,7 @@ export function leakCheck(leak: LeakCase, run: RunResultParts): SizingCheck {
     source: 'common practice, no source (an hour to notice a leak and act)',
     detail:
       reachedS === null
-        ? `A ${metres(leak.diameterM)} hole at its floor does not take ${vessel.id} below its minimum within ${minutes(LEAK_WATCH_S)} (lowest ${metres(lowest)}).`
-        : `A ${metres(leak.diameterM)} hole at its floor takes ${vessel.id} below its fish-safe minimum of ${metres(vessel.minLevel)} ${minutes(reachedS)} after it opens. A level alarm above the minimum buys time.`,
+        ? `A ${millimetres(leak.diameterM)} hole at its floor does not take ${vessel.id} below its minimum within ${minutes(LEAK_WATCH_S)} (lowest ${metres(lowest)}).`
+        : `A ${millimetres(leak.diameterM)} hole at its floor takes ${vessel.id} below its fish-safe minimum of ${metres(vessel.minLevel)} ${minutes(reachedS)} after it opens. A level alarm above the minimum buys time.`,
   });
 }

@@ -110,7 +110,7 @@ describe('sizing checks and the build sheet', () => {
     const line = find(checks, 'pump-line-leak', 'tank');
     expect(line.status).toBe('fails');
     expect(line.value).toBeCloseTo(0.05, 3);
-    expect(find(checks, 'tank-leak-time', 'tank').title).toMatch(/0\.005 m hole/);
+    expect(find(checks, 'tank-leak-time', 'tank').title).toMatch(/5 mm hole/);
   }, 120_000);
 
   it('refuses a power cut longer than a day, naming the field', async () => {

@@ -23,7 +23,7 @@ export function targetOptions(scenario: Scenario, parameter: SweepParameter): Ta
   if (kind === 'pump')
     return scenario.pumps.map((p) => ({
       id: p.id,
-      label: `pump ${p.id}`,
+      label: p.id,
       outlets: p.outlets.length,
     }));
   const bellOnly = parameter === 'intake-height';
@@ -34,7 +34,7 @@ export function targetOptions(scenario: Scenario, parameter: SweepParameter): Ta
         : v.kind !== 'bed',
     )
     .filter((v) => kind !== 'store' || v.shape.type !== 'table')
-    .map((v) => ({ id: v.id, label: `${v.kind} ${v.id}`, outlets: 0 }));
+    .map((v) => ({ id: v.id, label: v.kind === 'bed' ? v.id : `${v.id} (${v.kind})`, outlets: 0 }));
 }
 
 /** The value the design has now, SI; null when the part is missing. */
