@@ -17,6 +17,7 @@ import {
   type SimulationOutcome,
 } from '../../engine/index';
 import { integrateNaiveEuler } from './naive-euler';
+import { formatSweepBench, runSweepBench } from './sweep-bench';
 
 const RUNS = 7;
 
@@ -155,3 +156,7 @@ throughput('greenhouse, three beds', 'greenhouse-three-beds.json', 24 * 3600);
 throughput('drill (power cut, leak)', 'power-cut-and-leak-drill.json', 4 * 3600);
 eulerComparison();
 memory();
+
+// The operating-window sweep: 50 × 50 cells of 2 h through the server's worker pool.
+const sweep = await runSweepBench();
+console.log(`\n${formatSweepBench('cold', sweep.cold)}\n${formatSweepBench('warm', sweep.warm)}`);
