@@ -1,15 +1,16 @@
 /** A run's stored results: series (JSON and CSV), the downloadable result file, and comparisons. */
-import type {
-  RunComparison,
-  RunResultFile,
-  RunSeries,
-  RunSeriesQuery,
+import {
+  RunEventSchema,
+  type RunComparison,
+  type RunResultFile,
+  type RunSeries,
+  type RunSeriesQuery,
 } from '../../shared/contracts/runs';
 import type { SessionUser } from '../auth/session-user';
 import { findSystemAccess } from '../auth/system-access';
 import { notFound } from '../http/http-error';
 import { compareRuns } from './compare-runs';
-import { findRunSeries } from './runs-repository';
+import { findRunEvents, findRunSeries } from './runs-repository';
 import { requireRun, type RunsDeps } from './runs-service';
 import { selectSeries } from './select-series';
 import { decodeSeries, seriesToJson, type DecodedSeries } from './series-codec';
@@ -58,6 +59,9 @@ export async function getRunResultFile(
   const row = await requireRun(deps.db, user, runId, 'read');
   const run = toRun(row, deps.pool);
   const series = await loadSeries(deps, row.id);
+  const stored = await findRunEvents(deps.db, row.id);
+  const events =
+    stored && stored.events !== null ? RunEventSchema.array().parse(stored.events) : null;
   const { id, systemId, systemVersion, status, durationS, verdict, error, createdAt, finishedAt } =
     run;
   const file: RunResultFile = {
@@ -65,7 +69,7 @@ export async function getRunResultFile(
     run: { id, systemId, systemVersion, status, durationS, verdict, error, createdAt, finishedAt },
     scenario: row.scenario as Record<string, unknown>,
     summary: run.summary,
-    events: run.events,
+    events,
     verdicts: run.verdicts,
     massBalanceError: run.massBalanceError,
     stats: run.stats,

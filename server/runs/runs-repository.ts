@@ -1,6 +1,6 @@
 /** Drizzle queries for runs. The `series` bytes are read only by the series endpoints. */
 import { and, asc, count, desc, eq, getTableColumns, inArray, sql, type SQL } from 'drizzle-orm';
-import type { RunListQuery } from '../../shared/contracts/runs';
+import { RUN_EVENTS_SHOWN, type RunListQuery } from '../../shared/contracts/runs';
 import type { Database } from '../db/database';
 import { runs, users } from '../db/schema';
 
@@ -61,9 +61,28 @@ export async function finishRun(db: Database, id: string, end: RunEnd): Promise<
   return updated.length > 0;
 }
 
-/** A run without its series. */
-export async function findRun(db: Database, id: string): Promise<RunRow | undefined> {
-  const [row] = await db.select(runColumns).from(runs).where(eq(runs.id, id));
+/** A run without its series, its events cut to the first RUN_EVENTS_SHOWN, and their full count. */
+export async function findRun(
+  db: Database,
+  id: string,
+): Promise<(RunRow & { eventCount: number }) | undefined> {
+  const [row] = await db
+    .select({
+      ...runColumns,
+      events: sql<unknown>`jsonb_path_query_array(${runs.events}, ${`$[0 to ${RUN_EVENTS_SHOWN - 1}]`}::jsonpath)`,
+      eventCount: sql<number>`coalesce(jsonb_array_length(${runs.events}), 0)::int`,
+    })
+    .from(runs)
+    .where(eq(runs.id, id));
+  return row;
+}
+
+/** All of a run's stored events (null before it ends), or undefined when the run is gone. */
+export async function findRunEvents(
+  db: Database,
+  id: string,
+): Promise<{ events: unknown } | undefined> {
+  const [row] = await db.select({ events: runs.events }).from(runs).where(eq(runs.id, id));
   return row;
 }
 
@@ -98,18 +117,46 @@ function orderFor(sort: RunListQuery['sort']): SQL[] {
   return [primary, desc(runs.createdAt), desc(runs.id)];
 }
 
+/** The columns of a runs-table row. */
+const listColumns = {
+  id: runs.id,
+  status: runs.status,
+  durationS: runs.durationS,
+  systemVersion: runs.systemVersion,
+  verdict: runs.verdict,
+  error: runs.error,
+  createdBy: runs.createdBy,
+  createdAt: runs.createdAt,
+  finishedAt: runs.finishedAt,
+  createdByName: users.name,
+};
+
+/** A runs-table row: no result bodies. */
+export type RunListRow = Pick<
+  RunRow,
+  | 'id'
+  | 'status'
+  | 'durationS'
+  | 'systemVersion'
+  | 'verdict'
+  | 'error'
+  | 'createdBy'
+  | 'createdAt'
+  | 'finishedAt'
+> & { createdByName: string | null };
+
 /** A page of a system's runs (with the starter's name) and the total matching count. */
 export async function listRunsOfSystem(
   db: Database,
   systemId: string,
   query: RunListQuery,
-): Promise<{ rows: Array<RunRow & { createdByName: string | null }>; total: number }> {
+): Promise<{ rows: RunListRow[]; total: number }> {
   const filters = [eq(runs.systemId, systemId)];
   if (query.status) filters.push(eq(runs.status, query.status));
   if (query.verdict) filters.push(eq(runs.verdict, query.verdict));
   const where = and(...filters);
   const rows = await db
-    .select({ ...runColumns, createdByName: users.name })
+    .select(listColumns)
     .from(runs)
     .leftJoin(users, eq(users.id, runs.createdBy))
     .where(where)

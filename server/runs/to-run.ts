@@ -10,7 +10,7 @@ import {
 } from '../../shared/contracts/runs';
 import type { VerdictStatus } from '../../shared/contracts/systems';
 import type { RunPool } from './run-pool';
-import type { RunRow } from './runs-repository';
+import type { RunListRow, RunRow } from './runs-repository';
 
 const STATUSES: readonly RunStatus[] = [
   'queued',
@@ -41,7 +41,8 @@ function statNumber(stats: unknown, key: string): number | null {
 }
 
 /** A stored run as `GET /api/runs/:id` shows it (result parts checked against the contract). */
-export function toRun(row: RunRow, pool: RunPool | undefined): Run {
+export function toRun(row: RunRow & { eventCount?: number }, pool: RunPool | undefined): Run {
+  const events = row.events === null ? null : RunEventSchema.array().parse(row.events);
   return {
     id: row.id,
     systemId: row.systemId,
@@ -53,7 +54,8 @@ export function toRun(row: RunRow, pool: RunPool | undefined): Run {
     error: row.error,
     summary: row.summary === null ? null : RunSummarySchema.parse(row.summary),
     verdicts: row.verdicts === null ? null : VerdictSchema.array().parse(row.verdicts),
-    events: row.events === null ? null : RunEventSchema.array().parse(row.events),
+    events,
+    eventCount: row.eventCount ?? events?.length ?? 0,
     stats: row.stats === null ? null : RunStatsSchema.parse(row.stats),
     massBalanceError: statNumber(row.stats, 'massBalanceError'),
     sampleCount: statNumber(row.stats, 'sampleCount') ?? 0,
@@ -64,10 +66,7 @@ export function toRun(row: RunRow, pool: RunPool | undefined): Run {
 }
 
 /** A row of the runs table. */
-export function toRunListItem(
-  row: RunRow & { createdByName: string | null },
-  pool: RunPool | undefined,
-): RunListItem {
+export function toRunListItem(row: RunListRow, pool: RunPool | undefined): RunListItem {
   return {
     id: row.id,
     status: asStatus(row.status),

@@ -132,6 +132,9 @@ export const RunStatsSchema = z.object({
 /** Integrator statistics. */
 export type RunStats = z.infer<typeof RunStatsSchema>;
 
+/** The most events `GET /api/runs/:id` carries (a month-long run can store tens of thousands). */
+export const RUN_EVENTS_SHOWN = 5000;
+
 /** `GET /api/runs/:id` and the 201 answer of a synchronous run. Result fields are null until it ends. */
 export const RunSchema = z.object({
   id: z.uuid(),
@@ -146,7 +149,10 @@ export const RunSchema = z.object({
   error: z.string().nullable(),
   summary: RunSummarySchema.nullable(),
   verdicts: z.array(VerdictSchema).nullable(),
+  /** The first RUN_EVENTS_SHOWN events in time order; `result.json` has all `eventCount` of them. */
   events: z.array(RunEventSchema).nullable(),
+  /** How many events the run stored. */
+  eventCount: z.number().int().nonnegative(),
   stats: RunStatsSchema.nullable(),
   massBalanceError: z.number().nullable(),
   /** Number of stored samples per channel (0 when no series). */

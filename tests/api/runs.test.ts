@@ -6,6 +6,7 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { ApiErrorSchema } from '../../shared/contracts/api-error';
 import {
+  RUN_EVENTS_SHOWN,
   RunListSchema,
   RunResultFileSchema,
   RunSchema,
@@ -53,6 +54,7 @@ describe('runs API', () => {
     expect(run.verdicts?.length).toBeGreaterThan(0);
     expect(run.events?.some((e) => e.kind === 'primed' && e.where === 'bed-a')).toBe(true);
     expect(run.sampleCount).toBeGreaterThan(300);
+    expect(run.eventCount).toBe(run.events?.length);
     expect(run.massBalanceError).toBeLessThan(1e-6);
     expect(run.stats?.wall_ms).toBeGreaterThanOrEqual(0);
     expect(RunSchema.parse((await w.owner.get(`/api/runs/${run.id}`)).body)).toEqual(run);
@@ -217,6 +219,23 @@ describe('runs API', () => {
       120_000,
     );
     expect(ended).toMatchObject({ status: 'completed', progress: 1, durationS: 25 * 3600 });
+  });
+
+  it('carries the first 5000 events of a long run and its event count; the download has them all', async () => {
+    const created = await w.owner
+      .post('/api/systems')
+      .send({ template: 'greenhouse', name: 'Greenhouse' });
+    const system = SystemSchema.parse(created.body);
+    const res = await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: '3 days' });
+    const started = RunStartedSchema.parse(res.body);
+    const run = await pollRun(w.owner, started.id, (r) => r.status === 'completed', 120_000);
+    expect(run.eventCount).toBeGreaterThan(RUN_EVENTS_SHOWN);
+    expect(run.events).toHaveLength(RUN_EVENTS_SHOWN);
+    const file = RunResultFileSchema.parse(
+      JSON.parse((await w.owner.get(`/api/runs/${run.id}/result.json`)).text),
+    );
+    expect(file.events).toHaveLength(run.eventCount);
+    expect(file.events?.slice(0, RUN_EVENTS_SHOWN)).toEqual(run.events);
   });
 
   it('lists runs with sort, filters and pages', async () => {
