@@ -46,7 +46,7 @@ test('the demo member sweeps a 10 × 10 operating window, opens a cell as a run,
   await expect(page.getByLabel('Steps, axis 1')).toHaveValue('10');
   await expect(page.getByLabel('Steps, axis 2')).toHaveValue('10');
   await page.getByLabel('Simulated hours per cell').fill('1');
-  await expect(page.locator('.count')).toHaveText('100 runs');
+  await expect(page.locator('tw-sweep-form .count')).toHaveText('100 runs');
   await page.getByRole('button', { name: 'Run the sweep' }).click();
 
   // Progress, then the map: 100 cells, the current design ringed.
@@ -56,6 +56,16 @@ test('the demo member sweeps a 10 × 10 operating window, opens a cell as a run,
   await expect(page.locator('tw-regime-map rect.regime-cycling').first()).toBeVisible();
   await expect(page.locator('tw-regime-map .legend')).toContainText('Cycling');
   await page.screenshot({ path: join(artifacts, 'operating-window.png'), fullPage: true });
+
+  // One parameter: a line chart of period, flood and drain times over regime bands.
+  await page.getByRole('checkbox', { name: 'Second parameter' }).uncheck();
+  await expect(page.locator('tw-sweep-form .count')).toHaveText('10 runs');
+  await page.getByRole('button', { name: 'Run the sweep' }).click();
+  await expect(page.locator('tw-regime-map path.line')).toHaveCount(3, { timeout: 120_000 });
+  await expect(cells).toHaveCount(10);
+  await page
+    .locator('tw-regime-map')
+    .screenshot({ path: join(artifacts, 'operating-window-line.png') });
 
   // A cycling cell opens as a full run of that cell's scenario.
   await page.locator('tw-regime-map rect.regime-cycling').nth(3).click();
