@@ -33,7 +33,9 @@ export function createApp(ctx: AppContext): Express {
       },
     }),
   );
-  app.use(pinoHttp({ logger: ctx.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(
+    pinoHttp({ logger: ctx.logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }),
+  );
   app.use(
     '/api',
     express.json({ limit: '1mb' }),

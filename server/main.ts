@@ -20,7 +20,9 @@ async function main(): Promise<void> {
   const config = loadConfig();
   const logger = pino({ level: config.logLevel });
   const database = await openDatabase(
-    config.databaseUrl ? { kind: 'postgres', url: config.databaseUrl } : { kind: 'pglite', dataDir: config.dataDir },
+    config.databaseUrl
+      ? { kind: 'postgres', url: config.databaseUrl }
+      : { kind: 'pglite', dataDir: config.dataDir },
   );
   if (database.isNew && config.seedDemo) {
     await seedDemo(database.db, demoSeedSteps);
@@ -28,13 +30,28 @@ async function main(): Promise<void> {
   }
   const auth = authSettingsFromConfig(config, resolveSessionSecret(config));
   const mail = await startMail(config, database.db, auth.mailFrom, logger);
-  const interrupted = await failInterruptedRuns(database.db, 'The server stopped during this run; run it again.');
-  if (interrupted > 0) logger.warn(`${interrupted} run(s) left over from the last start were marked failed`);
+  const interrupted = await failInterruptedRuns(
+    database.db,
+    'The server stopped during this run; run it again.',
+  );
+  if (interrupted > 0)
+    logger.warn(`${interrupted} run(s) left over from the last start were marked failed`);
   const runPool = new RunPool(defaultRunPoolOptions());
-  const ctx = { db: database.db, dbKind: database.kind, config, logger, version: readVersion(), auth, mailer: mail.mailer, runPool };
+  const ctx = {
+    db: database.db,
+    dbKind: database.kind,
+    config,
+    logger,
+    version: readVersion(),
+    auth,
+    mailer: mail.mailer,
+    runPool,
+  };
   const sessionStore = new DrizzleSessionStore(database.db);
   const pruneTimer = setInterval(() => {
-    sessionStore.prune().catch((error: unknown) => logger.warn({ err: error }, 'could not prune sessions'));
+    sessionStore
+      .prune()
+      .catch((error: unknown) => logger.warn({ err: error }, 'could not prune sessions'));
   }, SESSION_PRUNE_INTERVAL_MS);
   pruneTimer.unref();
   const app = createApp(ctx);
@@ -61,6 +78,8 @@ async function main(): Promise<void> {
 }
 
 main().catch((error: unknown) => {
-  process.stderr.write(`Tidewright could not start: ${error instanceof Error ? error.message : String(error)}\n`);
+  process.stderr.write(
+    `Tidewright could not start: ${error instanceof Error ? error.message : String(error)}\n`,
+  );
   process.exit(1);
 });

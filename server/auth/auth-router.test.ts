@@ -19,13 +19,11 @@ describe('the auth API', () => {
 
   it('registers a member, signs them in, and stores the session in the database', async () => {
     const client = await TestClient.create(createApp(t.ctx));
-    const res = await client
-      .post('/api/auth/register')
-      .send({
-        name: 'Rowan Reed',
-        email: '  Rowan@Example.TEST ',
-        password: 'gravel beds drain fast',
-      });
+    const res = await client.post('/api/auth/register').send({
+      name: 'Rowan Reed',
+      email: '  Rowan@Example.TEST ',
+      password: 'gravel beds drain fast',
+    });
     expect(res.status).toBe(201);
     const { user } = MeResponseSchema.parse(res.body);
     expect(user).toMatchObject({

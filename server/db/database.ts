@@ -29,8 +29,7 @@ export interface OpenDatabase {
 
 /** Where to find the database. */
 export type DatabaseLocation =
-  | { kind: 'pglite'; dataDir?: string; loadDataDir?: Blob }
-  | { kind: 'postgres'; url: string };
+  { kind: 'pglite'; dataDir?: string; loadDataDir?: Blob } | { kind: 'postgres'; url: string };
 
 const migrationsFolder = fileURLToPath(new URL('../../drizzle', import.meta.url));
 

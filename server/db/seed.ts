@@ -21,7 +21,10 @@ export const DEMO_ACCOUNTS = [
 export type SeedStep = (db: Database, userIds: Record<string, string>) => Promise<void>;
 
 /** Creates the demo accounts (if absent) and runs the feature steps. Returns the account ids. */
-export async function seedDemo(db: Database, steps: SeedStep[] = []): Promise<Record<string, string>> {
+export async function seedDemo(
+  db: Database,
+  steps: SeedStep[] = [],
+): Promise<Record<string, string>> {
   const passwordHash = await bcrypt.hash(DEMO_PASSWORD, 12);
   const ids: Record<string, string> = {};
   for (const account of DEMO_ACCOUNTS) {

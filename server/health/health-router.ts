@@ -14,7 +14,12 @@ export function healthRouter(ctx: AppContext): Router {
     } catch {
       db = 'down';
     }
-    const body: Health = { status: db === 'ok' ? 'ok' : 'degraded', db, dbKind: ctx.dbKind, version: ctx.version };
+    const body: Health = {
+      status: db === 'ok' ? 'ok' : 'degraded',
+      db,
+      dbKind: ctx.dbKind,
+      version: ctx.version,
+    };
     res.status(db === 'ok' ? 200 : 503).json(body);
   });
   return router;

@@ -12,12 +12,24 @@ interface BodyParserError extends Error {
 /** Maps HttpError and body-parser errors to their status; anything else is a logged 500. */
 export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next) => {
   let status = 500;
-  let body: ApiError = { error: { code: 'INTERNAL', message: 'Something went wrong on our side; it has been logged.' } };
+  let body: ApiError = {
+    error: { code: 'INTERNAL', message: 'Something went wrong on our side; it has been logged.' },
+  };
   if (err instanceof HttpError) {
     status = err.status;
-    body = { error: { code: err.code, message: err.message, ...(err.fields ? { fields: err.fields } : {}) } };
+    body = {
+      error: {
+        code: err.code,
+        message: err.message,
+        ...(err.fields ? { fields: err.fields } : {}),
+      },
+    };
     for (const [name, value] of Object.entries(err.headers ?? {})) res.setHeader(name, value);
-  } else if (err instanceof Error && typeof (err as BodyParserError).status === 'number' && (err as BodyParserError).expose) {
+  } else if (
+    err instanceof Error &&
+    typeof (err as BodyParserError).status === 'number' &&
+    (err as BodyParserError).expose
+  ) {
     const parserError = err as BodyParserError;
     status = parserError.status ?? 400;
     const code =
@@ -41,6 +53,8 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
 
 /** The JSON 404 that ends the API router. */
 export const notFoundHandler: RequestHandler = (req, res) => {
-  const body: ApiError = { error: { code: 'NOT_FOUND', message: `No API route ${req.method} ${req.originalUrl}.` } };
+  const body: ApiError = {
+    error: { code: 'NOT_FOUND', message: `No API route ${req.method} ${req.originalUrl}.` },
+  };
   res.status(404).json(body);
 };

@@ -10,7 +10,11 @@ import { inject } from 'vitest';
 import type { AppContext } from '../app-context';
 import { loadConfig } from '../config';
 import { openDatabase, type OpenDatabase } from '../db/database';
-import { DEFAULT_AUTH_LIMITS, authSettingsFromConfig, type AuthSettings } from '../auth/auth-settings';
+import {
+  DEFAULT_AUTH_LIMITS,
+  authSettingsFromConfig,
+  type AuthSettings,
+} from '../auth/auth-settings';
 import { startLocalSmtpServer } from '../mail/local-smtp-server';
 import { createLocalMailer } from '../mail/mailer';
 
@@ -57,9 +61,19 @@ async function openFreshPostgres(adminUrl: string): Promise<OpenDatabase> {
  * Test auth settings: bcrypt cost 4 (fast; the cost is stored in each hash) and rate limits high
  * enough that only tests about rate limiting meet them. Override any of them per test.
  */
-function testAuthSettings(config: ReturnType<typeof loadConfig>, overrides: Partial<AuthSettings>): AuthSettings {
+function testAuthSettings(
+  config: ReturnType<typeof loadConfig>,
+  overrides: Partial<AuthSettings>,
+): AuthSettings {
   const base = authSettingsFromConfig(config, randomBytes(32).toString('hex'));
-  const generous = { ...DEFAULT_AUTH_LIMITS, loginFailuresPerIp: 10_000, loginFailuresPerAccount: 10_000, registrationsPerIp: 10_000, resetsPerIp: 10_000, resetsPerAccount: 10_000 };
+  const generous = {
+    ...DEFAULT_AUTH_LIMITS,
+    loginFailuresPerIp: 10_000,
+    loginFailuresPerAccount: 10_000,
+    registrationsPerIp: 10_000,
+    resetsPerIp: 10_000,
+    resetsPerAccount: 10_000,
+  };
   return { ...base, bcryptCost: 4, limits: generous, ...overrides };
 }
 
@@ -72,7 +86,12 @@ export async function createTestContext(
   overrides: { auth?: Partial<AuthSettings> } = {},
 ): Promise<TestContext> {
   const database = await openTestDatabase();
-  const config = loadConfig({ NODE_ENV: 'test', TIDEWRIGHT_DATA: '/nonexistent', STATIC_DIR: '/nonexistent', ...env });
+  const config = loadConfig({
+    NODE_ENV: 'test',
+    TIDEWRIGHT_DATA: '/nonexistent',
+    STATIC_DIR: '/nonexistent',
+    ...env,
+  });
   const auth = testAuthSettings(config, overrides.auth ?? {});
   const smtp = await startLocalSmtpServer(database.db, 0);
   const mailer = createLocalMailer(smtp.port, auth.mailFrom);

@@ -137,15 +137,11 @@ describe('lessons', () => {
   });
 
   it('names questions about parts the system lacks, and problems in the scenario', async () => {
-    const badTarget = await teacher
-      .post('/api/lessons')
-      .send(
-        lessonRequest({
-          questions: [
-            { kind: 'vessel-low-level', id: 'low', prompt: 'How low?', vesselId: 'bed-a' },
-          ],
-        }),
-      );
+    const badTarget = await teacher.post('/api/lessons').send(
+      lessonRequest({
+        questions: [{ kind: 'vessel-low-level', id: 'low', prompt: 'How low?', vesselId: 'bed-a' }],
+      }),
+    );
     expect(badTarget.status).toBe(400);
     expect(errorOf(badTarget.body).fields).toEqual([
       {

@@ -30,10 +30,14 @@ describe('runs of a calibrated system', () => {
       })
       .where(eq(systems.id, system.id));
     const run = await runSystem(w.owner, system.id, { duration: 1800 });
-    const stored = RunWithSnapshotSchema.parse((await w.owner.get(`/api/runs/${run.id}?snapshot=1`)).body);
+    const stored = RunWithSnapshotSchema.parse(
+      (await w.owner.get(`/api/runs/${run.id}?snapshot=1`)).body,
+    );
     const snapshot = stored.scenario as unknown as Scenario;
     const bed = snapshot.vessels.find((v) => v.id === 'bed-a');
-    expect(bed?.kind === 'bed' && bed.drain.type === 'bell-siphon' && bed.drain.primingCoefficient).toBe(0.43);
+    expect(
+      bed?.kind === 'bed' && bed.drain.type === 'bell-siphon' && bed.drain.primingCoefficient,
+    ).toBe(0.43);
     expect(bed?.kind === 'bed' && bed.drain.dischargeLossMultiplier).toBe(1.7);
     expect(snapshot.pumps[0]?.flowScale).toBe(0.8);
   });

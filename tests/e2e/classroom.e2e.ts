@@ -36,18 +36,29 @@ async function signOut(page: Page, name: string): Promise<void> {
 
 /** The instructor's demo class page. */
 async function openDemoClass(page: Page): Promise<void> {
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: /Classes/ }).click();
-  await page.getByRole('link', { name: new RegExp(DEMO_CLASS_NAME.replace(/[()]/g, '\\$&')) }).click();
+  await page
+    .getByRole('navigation', { name: 'Main' })
+    .getByRole('link', { name: /Classes/ })
+    .click();
+  await page
+    .getByRole('link', { name: new RegExp(DEMO_CLASS_NAME.replace(/[()]/g, '\\$&')) })
+    .click();
   await expect(page.getByRole('heading', { level: 1 })).toHaveText(DEMO_CLASS_NAME);
 }
 
-test('an invited student predicts and runs a lesson, and the instructor sees the answer', async ({ page }) => {
+test('an invited student predicts and runs a lesson, and the instructor sees the answer', async ({
+  page,
+}) => {
   test.setTimeout(180_000);
   mkdirSync(artifacts, { recursive: true });
   const watch = watchPage(page, ['/api/auth/me']);
   const teacher = demo('instructor');
   const admin = demo('admin');
-  const student = { name: 'Robin Newcomer', email: `robin-${Date.now()}@example.test`, password: 'bells and slots and gravel' };
+  const student = {
+    name: 'Robin Newcomer',
+    email: `robin-${Date.now()}@example.test`,
+    password: 'bells and slots and gravel',
+  };
 
   // The instructor invites the new student.
   await signIn(page, teacher.email);
@@ -89,7 +100,9 @@ test('an invited student predicts and runs a lesson, and the instructor sees the
   await expect(page.getByText('Saved. When you are sure, run the system.')).toBeVisible();
   await page.getByRole('button', { name: 'Run the system' }).click();
 
-  await expect(page.getByRole('heading', { name: 'Prediction against result' })).toBeVisible({ timeout: 60_000 });
+  await expect(page.getByRole('heading', { name: 'Prediction against result' })).toBeVisible({
+    timeout: 60_000,
+  });
   const outcomes = page.locator('table.outcomes tbody tr');
   await expect(outcomes).toHaveCount(2);
   await expect(outcomes.nth(0)).toContainText('never starts');
@@ -111,7 +124,9 @@ test('an invited student predicts and runs a lesson, and the instructor sees the
 
   // Presentation mode: the class's predictions first, then the answer revealed to everyone.
   await page.getByRole('link', { name: 'Present' }).click();
-  await expect(page.locator('.prompt')).toHaveText('Will this siphon start, and will the bed flood and drain?');
+  await expect(page.locator('.prompt')).toHaveText(
+    'Will this siphon start, and will the bed flood and drain?',
+  );
   await page.getByRole('button', { name: 'Reveal the answer to the class' }).click();
   await expect(page.locator('.reveal')).toContainText('The simulation says');
   await page.screenshot({ path: join(artifacts, 'classroom-present.png'), fullPage: true });

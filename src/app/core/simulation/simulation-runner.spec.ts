@@ -43,7 +43,15 @@ function done(requestId: number) {
       events: [],
       verdicts: [],
       massBalanceError: 0,
-      stats: { steps: 1, rejected: 0, rhsEvaluations: 6, events: 0, wall_ms: 12, simulated_s: 60, eventsOmitted: 0 },
+      stats: {
+        steps: 1,
+        rejected: 0,
+        rhsEvaluations: 6,
+        events: 0,
+        wall_ms: 12,
+        simulated_s: 60,
+        eventsOmitted: 0,
+      },
       series: { t_s: [0, 60], channels: [] },
     },
   };

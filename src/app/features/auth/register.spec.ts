@@ -74,18 +74,16 @@ describe('Register', () => {
     type(root, 'input[type=email]', 'marigold@example.org');
     type(root, 'input[formcontrolname=password]', 'marigold-2024-xyz');
     root.querySelector('form')?.dispatchEvent(new Event('submit'));
-    http
-      .expectOne('/api/auth/register')
-      .flush(
-        {
-          error: {
-            code: 'VALIDATION_FAILED',
-            message: '1 invalid field',
-            fields: [{ path: 'password', message: 'Do not use your e-mail name in the password.' }],
-          },
+    http.expectOne('/api/auth/register').flush(
+      {
+        error: {
+          code: 'VALIDATION_FAILED',
+          message: '1 invalid field',
+          fields: [{ path: 'password', message: 'Do not use your e-mail name in the password.' }],
         },
-        { status: 400, statusText: 'Bad Request' },
-      );
+      },
+      { status: 400, statusText: 'Bad Request' },
+    );
     await settle();
     await fixture.whenStable();
     expect(errorsOf(root)).toEqual(['Do not use your e-mail name in the password.']);

@@ -58,17 +58,15 @@ describe('ResetPassword', () => {
     const { fixture, root, http } = await renderReset('tok_abcdefghijklmnopqrstuvwxyz');
     typePassword(root, 'a new long phrase');
     root.querySelector('form')?.dispatchEvent(new Event('submit'));
-    http
-      .expectOne('/api/auth/password-reset/confirm')
-      .flush(
-        {
-          error: {
-            code: 'RESET_TOKEN_INVALID',
-            message: 'This reset link is invalid, used or expired.',
-          },
+    http.expectOne('/api/auth/password-reset/confirm').flush(
+      {
+        error: {
+          code: 'RESET_TOKEN_INVALID',
+          message: 'This reset link is invalid, used or expired.',
         },
-        { status: 400, statusText: 'Bad Request' },
-      );
+      },
+      { status: 400, statusText: 'Bad Request' },
+    );
     await settle();
     await fixture.whenStable();
     expect(root.querySelector('[role=alert]')?.textContent).toContain(
