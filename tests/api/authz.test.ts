@@ -11,7 +11,7 @@ import { apiRouter } from '../../server/api-router';
 import { createApp } from '../../server/app';
 import { TestClient, signedInClient } from '../../server/testing/test-client';
 import { createTestContext, type TestContext } from '../../server/testing/test-context';
-import { snapshotDatabase } from './db-snapshot';
+import { digestDatabase } from './db-snapshot';
 import { listApiRoutes } from './list-api-routes';
 import { createRouteFixture, fillPath } from './route-fixture';
 import {
@@ -48,7 +48,7 @@ describe('authorization over every API route', () => {
   ) {
     const body = route.body ? ((await route.body(fixture)) as object) : undefined;
     const path = fillPath(route.path, fixture.params);
-    const before = await snapshotDatabase(t.ctx.db);
+    const before = await digestDatabase(t.ctx.db);
     const sent = withCsrf ? client.send(route.method, path) : client.agent[route.method](path);
     const test = route.query ? sent.query(route.query(fixture)) : sent;
     const res = await (body === undefined ? test : test.send(body));
@@ -63,7 +63,7 @@ describe('authorization over every API route', () => {
     withCsrf = true,
   ) {
     const { res, before } = await call(client, route, fixture, withCsrf);
-    expect(await snapshotDatabase(t.ctx.db)).toEqual(before);
+    expect(await digestDatabase(t.ctx.db)).toEqual(before);
     return res;
   }
 

@@ -3,7 +3,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { users } from '../../server/db/schema';
 import { createTestUser } from '../../server/testing/test-client';
 import { createTestContext, type TestContext } from '../../server/testing/test-context';
-import { digestRowsMentioning, snapshotDatabase } from './db-snapshot';
+import { digestRowsMentioning, digestDatabase } from './db-snapshot';
 
 describe('database snapshots for the authorization tests', () => {
   let t: TestContext;
@@ -16,9 +16,9 @@ describe('database snapshots for the authorization tests', () => {
 
   it('see a change to any row', async () => {
     const { user } = await createTestUser(t.ctx);
-    const before = await snapshotDatabase(t.ctx.db);
+    const before = await digestDatabase(t.ctx.db);
     await t.ctx.db.update(users).set({ name: 'Changed' }).where(eq(users.id, user.id));
-    expect(await snapshotDatabase(t.ctx.db)).not.toEqual(before);
+    expect(await digestDatabase(t.ctx.db)).not.toEqual(before);
   });
 
   it('digest only the rows mentioning the watched ids', async () => {

@@ -1,5 +1,9 @@
-/** A snapshot of every table but `sessions`, to prove a denied request changed nothing. */
-import { getTableName, is, sql } from 'drizzle-orm';
+/**
+ * Digests of the database, to prove a request changed nothing: per table (except `sessions`), an
+ * md5 of its rows' JSON, computed inside the database in one query so a test can take one
+ * before and after every request. A mismatch names the tables that changed.
+ */
+import { getTableName, is, sql, type SQL } from 'drizzle-orm';
 import { PgTable } from 'drizzle-orm/pg-core';
 import type { Database } from '../../server/db/database';
 import * as schema from '../../server/db/schema';
@@ -7,48 +11,38 @@ import * as schema from '../../server/db/schema';
 /** Tables a request may touch without changing anybody's data (session expiry is renewed). */
 const IGNORED = new Set(['sessions']);
 
-function tables(): PgTable[] {
-  return Object.values(schema as Record<string, unknown>).filter((value): value is PgTable =>
-    is(value, PgTable),
+function tableNames(): string[] {
+  return Object.values(schema as Record<string, unknown>)
+    .filter((value): value is PgTable => is(value, PgTable))
+    .map((table) => getTableName(table))
+    .filter((name) => !IGNORED.has(name))
+    .sort();
+}
+
+async function digest(
+  db: Database,
+  pattern: string | null,
+): Promise<Record<string, string | null>> {
+  const perTable: SQL[] = tableNames().map(
+    (name) =>
+      sql`select ${name}::text as name, md5(string_agg(j, ',' order by j)) as digest from (select row_to_json(t)::text as j from ${sql.identifier(name)} t) rows ${pattern === null ? sql`` : sql`where j ~ ${pattern}`}`,
   );
+  const result = await db.execute<{ name: string; digest: string | null }>(
+    sql.join(perTable, sql` union all `),
+  );
+  const rows = (result as unknown as { rows: { name: string; digest: string | null }[] }).rows;
+  return Object.fromEntries(rows.map((row) => [row.name, row.digest]));
 }
 
-/** Every row of every table (except sessions), as comparable JSON keyed by table name. */
-export async function snapshotDatabase(db: Database): Promise<Record<string, string[]>> {
-  const out: Record<string, string[]> = {};
-  for (const table of tables()) {
-    const name = getTableName(table);
-    if (IGNORED.has(name)) continue;
-    const rows = await db.select().from(table);
-    out[name] = rows
-      .map((row) =>
-        JSON.stringify(row, (_key, value: unknown) =>
-          Buffer.isBuffer(value) ? value.toString('base64') : value,
-        ),
-      )
-      .sort();
-  }
-  return out;
+/** Every table's digest (null for an empty table). */
+export function digestDatabase(db: Database): Promise<Record<string, string | null>> {
+  return digest(db, null);
 }
 
-/**
- * A digest, per table, of the rows whose JSON mentions any of `ids` (e.g. a bystander's user
- * and resource ids), computed in the database so that checking it after every request is cheap.
- */
-export async function digestRowsMentioning(
+/** Every table's digest over only the rows whose JSON mentions one of `ids` (e.g. a bystander's). */
+export function digestRowsMentioning(
   db: Database,
   ids: readonly string[],
 ): Promise<Record<string, string | null>> {
-  const pattern = ids.map((id) => id.replace(/[^0-9a-zA-Z-]/g, '')).join('|');
-  const out: Record<string, string | null> = {};
-  for (const table of tables()) {
-    const name = getTableName(table);
-    if (IGNORED.has(name)) continue;
-    const result = await db.execute<{ digest: string | null }>(
-      sql`select md5(string_agg(j, ',' order by j)) as digest from (select row_to_json(t)::text as j from ${sql.identifier(name)} t) rows where j ~ ${pattern}`,
-    );
-    out[name] =
-      (result as unknown as { rows: { digest: string | null }[] }).rows[0]?.digest ?? null;
-  }
-  return out;
+  return digest(db, ids.map((id) => id.replace(/[^0-9a-zA-Z-]/g, '')).join('|'));
 }

@@ -9,7 +9,7 @@ import { ApiErrorSchema } from '../../shared/contracts/api-error';
 import { createApp } from '../../server/app';
 import { TestClient } from '../../server/testing/test-client';
 import { createTestContext, type TestContext } from '../../server/testing/test-context';
-import { snapshotDatabase } from './db-snapshot';
+import { digestDatabase } from './db-snapshot';
 import { createRouteFixture, fillPath } from './route-fixture';
 import { allRoutes, isMutating, routeTitle, type RouteCase } from './route-table';
 
@@ -46,10 +46,10 @@ describe('malformed bodies on every mutating route', () => {
     send: () => Promise<{ status: number; body: unknown }>,
     label = '',
   ) {
-    const before = await snapshotDatabase(t.ctx.db);
+    const before = await digestDatabase(t.ctx.db);
     const res = await send();
     expect(
-      await snapshotDatabase(t.ctx.db),
+      await digestDatabase(t.ctx.db),
       `${label} answered ${res.status} and changed the database`,
     ).toEqual(before);
     return { status: res.status, error: ApiErrorSchema.parse(res.body).error };
