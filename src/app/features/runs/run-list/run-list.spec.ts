@@ -60,6 +60,7 @@ function run(id: string): Run {
     },
     verdicts: [],
     events: [],
+    eventCount: 0,
     stats: null,
     massBalanceError: 0,
     sampleCount: 10,
