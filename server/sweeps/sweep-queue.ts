@@ -4,9 +4,10 @@
  * per app context, made on first use; `closeSweepQueue` stops it.
  */
 import type { AppContext } from '../app-context';
-import { runPoolFor } from '../runs/run-pool-for';
+import type { RunPool } from '../runs/run-pool';
 import { LocalSweepQueue } from './local-sweep-queue';
 import { PgBossSweepQueue } from './pg-boss-sweep-queue';
+import { makeSweepPool } from './sweep-pool';
 import type { SweepHeadRow } from './sweeps-repository';
 
 /** A stored sweep to start: its row with the scenario and parameters. */
@@ -26,17 +27,23 @@ export interface SweepQueue {
   close(): Promise<void>;
 }
 
-const queues = new WeakMap<AppContext, SweepQueue>();
+const queues = new WeakMap<AppContext, { queue: SweepQueue; pool: RunPool }>();
 
-/** The sweep queue of this context: pg-boss on a PostgreSQL server, else the local pool. */
+/**
+ * The sweep queue of this context: pg-boss on a PostgreSQL server, else local; either way the
+ * cells run on this process's sweep pool (made with the queue, on first use).
+ */
 export function sweepQueueFor(ctx: AppContext): SweepQueue {
-  let queue = queues.get(ctx);
-  if (!queue) {
-    const deps = { db: ctx.db, pool: runPoolFor(ctx), logger: ctx.logger };
-    queue = ctx.dbKind === 'postgres' ? new PgBossSweepQueue(deps) : new LocalSweepQueue(deps);
-    queues.set(ctx, queue);
+  let entry = queues.get(ctx);
+  if (!entry) {
+    const pool = makeSweepPool();
+    const deps = { db: ctx.db, pool, logger: ctx.logger };
+    const queue =
+      ctx.dbKind === 'postgres' ? new PgBossSweepQueue(deps) : new LocalSweepQueue(deps);
+    entry = { queue, pool };
+    queues.set(ctx, entry);
   }
-  return queue;
+  return entry.queue;
 }
 
 /**
@@ -48,10 +55,11 @@ export async function startSweepWorkers(ctx: AppContext): Promise<void> {
   if (queue instanceof PgBossSweepQueue) await queue.ready();
 }
 
-/** Stops the context's sweep queue (call before closing the database). */
+/** Stops the context's sweep queue and its workers (call before closing the database). */
 export async function closeSweepQueue(ctx: AppContext): Promise<void> {
-  const queue = queues.get(ctx);
-  if (!queue) return;
+  const entry = queues.get(ctx);
+  if (!entry) return;
   queues.delete(ctx);
-  await queue.close();
+  await entry.queue.close();
+  await entry.pool.close();
 }

@@ -1,7 +1,7 @@
 /**
  * Benchmark: a 50 × 50 operating-window sweep of a one-bed system (the classroom tabletop unit),
- * 2 simulated hours per cell, through the same cell runner and worker pool the server uses, with
- * one worker per core. Goal: under 10 s on a 2-core machine. Prints cold (including worker start)
+ * 2 simulated hours per cell, through the same cell runner and sweep pool the server uses (one
+ * worker per core). Goal: under 10 s on a 2-core machine. Prints cold (including worker start)
  * and warm figures. Run alone: `npx tsx tests/bench/sweep-bench.ts`.
  */
 import { readFileSync } from 'node:fs';
@@ -9,8 +9,9 @@ import { availableParallelism, loadavg } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import type { SweepCell, SweepParameters } from '../../shared/contracts/sweeps';
 import { parseScenario, type Scenario } from '../../shared/scenario/index';
-import { defaultRunPoolOptions, RunPool } from '../../server/runs/run-pool';
+import type { RunPool } from '../../server/runs/run-pool';
 import { SweepCellRunner } from '../../server/sweeps/sweep-cell-runner';
+import { makeSweepPool } from '../../server/sweeps/sweep-pool';
 
 /** The figures of one timed sweep. */
 export interface SweepBenchResult {
@@ -97,7 +98,7 @@ async function timeSweep(
 export async function runSweepBench(
   steps = 50,
 ): Promise<{ cold: SweepBenchResult; warm: SweepBenchResult }> {
-  const pool = new RunPool({ ...defaultRunPoolOptions(), size: availableParallelism() });
+  const pool = makeSweepPool(availableParallelism());
   try {
     const base = tabletopScenario();
     const cold = await timeSweep(pool, base, steps, 'bench-cold');
