@@ -7,6 +7,10 @@ import {
   type MyAnswer,
 } from '../../../../../shared/contracts/classroom';
 import { EXAMPLE_SCENARIO_FILE } from '../../../../../shared/scenario';
+import {
+  SIMULATION_WORKER_FACTORY,
+  type SimulationWorker,
+} from '../../../core/simulation/simulation-runner';
 import { StudentLesson } from './student-lesson';
 
 const LESSON: Lesson = {
@@ -29,10 +33,22 @@ const LESSON: Lesson = {
   updatedAt: '2030-01-01T00:00:00.000Z',
 };
 
+/** A worker that never answers, so the lesson's animation stays in preparation. */
+const silentWorker = (): SimulationWorker => ({
+  onmessage: null,
+  onerror: null,
+  postMessage: () => undefined,
+  terminate: () => undefined,
+});
+
 async function render(lesson: Lesson) {
   TestBed.configureTestingModule({
     imports: [StudentLesson],
-    providers: [provideHttpClient(), provideHttpClientTesting()],
+    providers: [
+      provideHttpClient(),
+      provideHttpClientTesting(),
+      { provide: SIMULATION_WORKER_FACTORY, useValue: () => silentWorker() },
+    ],
   });
   const fixture = TestBed.createComponent(StudentLesson);
   fixture.componentRef.setInput('lesson', lesson);

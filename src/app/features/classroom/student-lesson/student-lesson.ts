@@ -25,6 +25,7 @@ import { ElevationDrawing } from '../../systems/elevation-drawing/elevation-draw
 import { UnitPreference } from '../../systems/unit-preference';
 import { REGIME_WORDS, answerUnit, answerWords, toleranceWords } from '../answer-units';
 import { ClassroomApi } from '../classroom-api';
+import { LessonAnimation } from '../lesson-animation/lesson-animation';
 import { problemMessage } from '../problem-message';
 import { SimulationSummary } from '../simulation-summary/simulation-summary';
 import { predictionForm, readPredictions } from './prediction-form';
@@ -38,6 +39,7 @@ import { predictionForm, readPredictions } from './prediction-form';
   selector: 'tw-student-lesson',
   imports: [
     ElevationDrawing,
+    LessonAnimation,
     MatButtonModule,
     MatFormFieldModule,
     MatIconModule,
