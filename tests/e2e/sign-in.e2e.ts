@@ -72,5 +72,6 @@ test('a member is not shown Admin and is sent away from /admin', async ({ page }
   await expect(page).toHaveURL(/\/systems$/);
   await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link')).toHaveText([
     /Systems/,
+    /Classes/,
   ]);
 });
