@@ -12,6 +12,7 @@ import { DrizzleSessionStore } from './session/drizzle-session-store';
 import { resolveSessionSecret } from './session/session-secret';
 import { defaultRunPoolOptions, RunPool } from './runs/run-pool';
 import { failInterruptedRuns } from './runs/runs-repository';
+import { closeSweepQueue, startSweepWorkers } from './sweeps/sweep-queue';
 
 /** Expired sessions are deleted this often. */
 const SESSION_PRUNE_INTERVAL_MS = 15 * 60_000;
@@ -47,6 +48,8 @@ async function main(): Promise<void> {
     mailer: mail.mailer,
     runPool,
   };
+  // With PostgreSQL every server process takes shared sweep cells from the start.
+  if (ctx.dbKind === 'postgres') await startSweepWorkers(ctx);
   const sessionStore = new DrizzleSessionStore(database.db);
   const pruneTimer = setInterval(() => {
     sessionStore
@@ -66,8 +69,8 @@ async function main(): Promise<void> {
     server.close();
     server.closeAllConnections();
     clearInterval(pruneTimer);
-    void runPool
-      .close()
+    void closeSweepQueue(ctx)
+      .then(() => runPool.close())
       .then(() => mail.close())
       .catch(() => undefined)
       .then(() => database.close())

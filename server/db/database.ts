@@ -49,6 +49,9 @@ async function countMigrations(db: Database): Promise<number> {
 export async function openDatabase(location: DatabaseLocation): Promise<OpenDatabase> {
   if (location.kind === 'postgres') {
     const pool = new pg.Pool({ connectionString: location.url, max: 10 });
+    // An idle client dropped by the server (a restart, or a test database being dropped) must not
+    // crash the process; the pool replaces it and the next query reports any lasting problem.
+    pool.on('error', () => {});
     const db = drizzlePg({ client: pool, schema }) as unknown as Database;
     const isNew = (await countMigrations(db)) === 0;
     await migratePg(drizzlePg({ client: pool, schema }), { migrationsFolder });
