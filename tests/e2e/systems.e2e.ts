@@ -108,6 +108,8 @@ test('the demo member edits the greenhouse, sees the drawing and live verdict fo
   await page.goto(`/systems/${systemId}`);
   await expect(liveBeds).toContainText('floods and drains', { timeout: 15_000 });
   await setStandpipeHeight(page, 1.15);
+  await page.getByRole('button', { name: 'Save', exact: true }).click();
+  await expect(page.getByText('Saved', { exact: true })).toBeVisible();
   const secondRun = await runAndOpen(page);
   expect(secondRun).not.toBe(firstRun);
   await page.goto(`/systems/${systemId}/runs`);
