@@ -35,16 +35,3 @@ describe('level conversions', () => {
     expect(lengthToMetres(25, 'cm')).toBe(0.25);
   });
 });
-
-describe('waterDensityKgPerM3', () => {
-  it('matches IAPWS-95 densities at 1 atm (Wagner & Pruss 2002) within 0.01 kg/m³', async () => {
-    const { waterDensityKgPerM3 } = await import('./water-density');
-    for (const [temperatureC, density] of [
-      [4, 999.975],
-      [20, 998.207],
-      [25, 997.048],
-    ] as const) {
-      expect(Math.abs(waterDensityKgPerM3(temperatureC) - density)).toBeLessThan(0.01);
-    }
-  });
-});

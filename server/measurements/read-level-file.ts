@@ -13,7 +13,7 @@ import { decodeTextFile } from './decode-text-file';
 import { guessImportOptions } from './guess-import-options';
 import { parseLevelCsv, type KnownVessel, type ParsedLevelCsv } from './parse-level-csv';
 import { readCsvTable } from './read-csv-table';
-import { waterDensityKgPerM3 } from './water-density';
+import { waterDensityKgPerM3 } from '../../engine/index';
 
 /** What to read: the bytes, the (already validated) options or none to guess, and the system's vessels. */
 export interface LevelFileRequest {
