@@ -1,5 +1,5 @@
 /** The light/dark choice, kept in localStorage and applied as `color-scheme` on <html>. */
-import { DOCUMENT, Injectable, effect, inject, signal } from '@angular/core';
+import { DOCUMENT, Injectable, inject, signal } from '@angular/core';
 
 /** The two schemes the theme defines. */
 export type SchemeName = 'light' | 'dark';
@@ -21,16 +21,17 @@ export class ColorScheme {
   readonly scheme = this.current.asReadonly();
 
   constructor() {
-    effect(() => {
-      const scheme = this.current();
-      this.document.documentElement.style.colorScheme = scheme;
-      this.storage()?.setItem(STORAGE_KEY, scheme);
-    });
+    // Written at once, not in an effect: an effect waits for the next change detection, so a
+    // page read straight after a click would still see the old scheme.
+    this.document.documentElement.style.colorScheme = this.current();
   }
 
-  /** Switches light to dark and back. */
+  /** Switches light to dark and back, applies the new scheme and saves it. */
   toggle(): void {
-    this.current.update((scheme) => (scheme === 'dark' ? 'light' : 'dark'));
+    const next: SchemeName = this.current() === 'dark' ? 'light' : 'dark';
+    this.current.set(next);
+    this.document.documentElement.style.colorScheme = next;
+    this.storage()?.setItem(STORAGE_KEY, next);
   }
 
   private initialScheme(): SchemeName {
