@@ -91,7 +91,8 @@ async function render() {
   return { fixture, http, root: fixture.nativeElement as HTMLElement };
 }
 
-async function openBedsAndType(
+/** Types `text` into bed-a's standpipe height and returns at once, before any debounce ends. */
+async function typeStandpipeHeight(
   fixture: { whenStable(): Promise<unknown> },
   root: HTMLElement,
   text: string,
@@ -108,8 +109,22 @@ async function openBedsAndType(
   if (!input) throw new Error('No standpipe height field on the Beds tab.');
   input.value = text;
   input.dispatchEvent(new Event('input'));
+}
+
+async function openBedsAndType(
+  fixture: { whenStable(): Promise<unknown> },
+  root: HTMLElement,
+  text: string,
+) {
+  await typeStandpipeHeight(fixture, root, text);
   await pause(200);
   await fixture.whenStable();
+}
+
+function runButton(root: HTMLElement): HTMLButtonElement {
+  const found = root.querySelector<HTMLButtonElement>('button.run');
+  if (!found) throw new Error('No run button.');
+  return found;
 }
 
 // Rendering the whole editor in jsdom takes seconds on a busy machine; the cap is not a speed test.
@@ -169,6 +184,46 @@ describe('SystemEditor', { timeout: 30_000 }, () => {
     await fixture.whenStable();
     expect(root.querySelector('.banner')?.textContent).toContain(
       'Someone saved this system after you opened it',
+    );
+  });
+
+  it('saves the value typed just before "Save and run" is clicked, then runs it', async () => {
+    const { fixture, http, root } = await render();
+    await typeStandpipeHeight(fixture, root, '0.2');
+    // The click comes with the keystroke, before the form's debounced copy of the document.
+    fixture.detectChanges();
+    expect(runButton(root).textContent).toContain('Save and run');
+    runButton(root).click();
+    const put = http.expectOne({ method: 'PUT', url: `/api/systems/${ID}` });
+    const body = put.request.body as {
+      scenario: { vessels: { drain?: { standpipe: { height: number } } }[] };
+    };
+    expect(body.scenario.vessels[1]?.drain?.standpipe.height).toBe(0.2);
+    const saved = system(4);
+    saved.scenario = body.scenario as unknown as Record<string, unknown>;
+    put.flush(saved);
+    await pause(0);
+    const started = http.expectOne({ method: 'POST', url: `/api/systems/${ID}/runs` });
+    started.flush(
+      { error: { code: 'INTERNAL', message: 'No runner in this test.' } },
+      { status: 500, statusText: 'Server Error' },
+    );
+    await pause(0);
+    await fixture.whenStable();
+    expect(root.querySelector('.save-state')?.textContent?.trim()).toBe('Saved');
+  });
+
+  it('refuses to save a value typed just before the click that breaks a rule', async () => {
+    const { fixture, http, root } = await render();
+    await typeStandpipeHeight(fixture, root, '0.5');
+    fixture.detectChanges();
+    runButton(root).click();
+    await pause(0);
+    http.expectNone({ method: 'PUT', url: `/api/systems/${ID}` });
+    http.expectNone({ method: 'POST', url: `/api/systems/${ID}/runs` });
+    await fixture.whenStable();
+    expect(root.querySelector('.issues')?.textContent).toContain(
+      'vessels[1].drain.standpipe.height',
     );
   });
 });

@@ -22,7 +22,7 @@ import { MatTabsModule } from '@angular/material/tabs';
 import { MatDialog } from '@angular/material/dialog';
 import { MatSnackBar } from '@angular/material/snack-bar';
 import { Router, RouterLink } from '@angular/router';
-import { debounceTime, firstValueFrom } from 'rxjs';
+import { debounceTime, firstValueFrom, tap } from 'rxjs';
 import type { FieldError } from '../../../../../shared/contracts/api-error';
 import type { System } from '../../../../../shared/contracts/systems';
 import { readApiError } from '../../../core/http/read-api-error';
@@ -40,17 +40,10 @@ import { scenarioErrorStateMatcher } from './editor-section';
 import { EditorState } from './editor-state';
 import { EventsFields } from './events-fields';
 import { LiveVerdict } from './live-verdict';
-import { PumpFields } from './pump-fields';
+import { PumpList } from './pump-list';
 import { RunFields } from './run-fields';
 import { ShareDialog, type ShareDialogData } from './share-dialog';
-import { freshId, newPump } from './new-parts';
-import {
-  type DynamicGroup,
-  childArray,
-  documentFromForm,
-  editableScenario,
-  toControl,
-} from './scenario-form';
+import { type DynamicGroup, documentFromForm, editableScenario, toControl } from './scenario-form';
 import { VesselList } from './vessel-list';
 
 /** Simulated time of the live check after each change, s. */
@@ -79,7 +72,7 @@ const BROWSER_MAX_SAMPLES = 800;
     MatInputModule,
     MatProgressBarModule,
     MatTabsModule,
-    PumpFields,
+    PumpList,
     ReactiveFormsModule,
     RouterLink,
     RunFields,
@@ -124,6 +117,8 @@ export class SystemEditor {
     null,
   );
   private readonly showWhole = signal(false);
+  /** Edits of the name and the form so far; a save leaves `dirty` set if one came in meanwhile. */
+  private edits = 0;
 
   protected readonly answer = computed(
     () => (this.showWhole() ? this.whole.done() : null) ?? this.live.done(),
@@ -152,7 +147,7 @@ export class SystemEditor {
       this.live.dispose();
       this.whole.dispose();
     });
-    this.name.valueChanges.pipe(takeUntilDestroyed()).subscribe(() => this.dirty.set(true));
+    this.name.valueChanges.pipe(takeUntilDestroyed()).subscribe(() => this.noteEdit());
     effect(() => void this.load(this.id()));
     effect(() => {
       const scenario = this.state.scenario();
@@ -166,24 +161,6 @@ export class SystemEditor {
         maxSamples: BROWSER_MAX_SAMPLES,
       });
     });
-  }
-
-  /** The pump groups with their ids, re-read whenever the document changes. */
-  protected pumps(form: DynamicGroup): { control: DynamicGroup; id: string }[] {
-    this.state.document();
-    return childArray(form, 'pumps').controls.map((control) => ({
-      control: control as DynamicGroup,
-      id: String(control.get('id')?.value ?? ''),
-    }));
-  }
-
-  protected addPump(form: DynamicGroup): void {
-    const vessels = this.state.vesselIds();
-    const source = vessels.find((id) => !id.startsWith('bed')) ?? vessels[0] ?? 'tank';
-    const target = vessels.find((id) => id !== source) ?? source;
-    childArray(form, 'pumps').push(
-      toControl(newPump(freshId('pump', this.state.pumpIds()), source, target)),
-    );
   }
 
   protected runWholeHere(): void {
@@ -206,6 +183,10 @@ export class SystemEditor {
   protected async save(): Promise<boolean> {
     const system = this.system();
     if (!system) return false;
+    // A click may come before the debounced copy of the last keystroke: save what the form holds.
+    this.commitEdits();
+    if (this.state.issues().length > 0) return false;
+    const editsSent = this.edits;
     this.saving.set(true);
     this.saveError.set(null);
     try {
@@ -215,7 +196,7 @@ export class SystemEditor {
         scenario: this.state.document(),
       });
       this.system.set(saved);
-      this.dirty.set(false);
+      this.dirty.set(this.edits !== editsSent);
       return true;
     } catch (error: unknown) {
       if (!(error instanceof HttpErrorResponse)) throw error;
@@ -284,11 +265,25 @@ export class SystemEditor {
       this.name.disable();
     }
     this.state.document.set(documentFromForm(form.getRawValue()));
-    form.valueChanges.pipe(debounceTime(120), takeUntilDestroyed(this.destroyRef)).subscribe(() => {
-      this.state.document.set(documentFromForm(form.getRawValue()));
-      this.dirty.set(true);
-    });
+    form.valueChanges
+      .pipe(
+        tap(() => this.noteEdit()),
+        debounceTime(120),
+        takeUntilDestroyed(this.destroyRef),
+      )
+      .subscribe(() => this.commitEdits());
     this.form.set(form);
     this.dirty.set(false);
+  }
+
+  private noteEdit(): void {
+    this.edits++;
+    this.dirty.set(true);
+  }
+
+  /** Copies the form's values into the document now (the live check follows it). */
+  private commitEdits(): void {
+    const form = this.form();
+    if (form) this.state.document.set(documentFromForm(form.getRawValue()));
   }
 }
