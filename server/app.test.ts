@@ -27,22 +27,36 @@ describe('createApp', () => {
     expect(ApiErrorSchema.parse(res.body).error.code).toBe('NOT_FOUND');
   });
 
-  it('rejects malformed JSON with a 400 that says so', async () => {
+  it('rejects malformed JSON with a 400 that names the body', async () => {
     const res = await request(createApp(t.ctx))
       .post('/api/health')
       .set('content-type', 'application/json')
       .send('{"a":');
     expect(res.status).toBe(400);
-    expect(ApiErrorSchema.parse(res.body).error.code).toBe('INVALID_JSON');
+    const { error } = ApiErrorSchema.parse(res.body);
+    expect(error.code).toBe('INVALID_JSON');
+    expect(error.fields).toEqual([{ path: '(body)', message: error.message }]);
   });
 
-  it('rejects a body over the size limit with a 413', async () => {
+  it('rejects a body over the size limit with a 400 that gives the limit', async () => {
     const res = await request(createApp(t.ctx))
       .post('/api/health')
       .set('content-type', 'application/json')
       .send(JSON.stringify({ blob: 'x'.repeat(1_100_000) }));
-    expect(res.status).toBe(413);
-    expect(ApiErrorSchema.parse(res.body).error.code).toBe('BODY_TOO_LARGE');
+    expect(res.status).toBe(400);
+    const { error } = ApiErrorSchema.parse(res.body);
+    expect(error.code).toBe('BODY_TOO_LARGE');
+    expect(error.message).toContain('larger than the 1 MB limit');
+    expect(error.fields).toEqual([{ path: '(body)', message: error.message }]);
+  });
+
+  it('parses a body just under the size limit and goes on to the next check', async () => {
+    const res = await request(createApp(t.ctx))
+      .post('/api/health')
+      .set('content-type', 'application/json')
+      .send(JSON.stringify({ blob: 'x'.repeat(1_000_000) }));
+    // Past the parser, the missing CSRF token is the next refusal.
+    expect([res.status, ApiErrorSchema.parse(res.body).error.code]).toEqual([403, 'CSRF_FAILED']);
   });
 
   it('sends security headers', async () => {

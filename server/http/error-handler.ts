@@ -7,6 +7,41 @@ interface BodyParserError extends Error {
   type?: string;
   status?: number;
   expose?: boolean;
+  /** For `entity.too.large`: the limit in bytes. */
+  limit?: number;
+}
+
+function isBodyParserError(err: unknown): err is BodyParserError {
+  return (
+    err instanceof Error &&
+    typeof (err as BodyParserError).status === 'number' &&
+    (err as BodyParserError).expose === true
+  );
+}
+
+/** A byte count as people say it: `1 MB`, `512 kB`, `1.5 MB`. */
+function byteSize(bytes: number): string {
+  const mb = bytes / (1024 * 1024);
+  if (mb >= 1) return `${Number(mb.toFixed(1))} MB`;
+  return `${Number((bytes / 1024).toFixed(1))} kB`;
+}
+
+/**
+ * A body the parser refused (a 4xx, as `expose` says). Every one is a 400 in the validation shape, the whole body being the
+ * field at fault: bad JSON, a body over the limit (with the limit), or another parser refusal.
+ */
+function bodyParserAnswer(err: BodyParserError): { status: number; body: ApiError } {
+  let code = 'BAD_REQUEST';
+  let message = err.message;
+  if (err.type === 'entity.too.large') {
+    code = 'BODY_TOO_LARGE';
+    const limit = err.limit === undefined ? 'size' : byteSize(err.limit);
+    message = `The request body is larger than the ${limit} limit; send less data at once.`;
+  } else if (err.type === 'entity.parse.failed') {
+    code = 'INVALID_JSON';
+    message = 'The request body is not valid JSON; check its quotes, commas and brackets.';
+  }
+  return { status: 400, body: { error: { code, message, fields: [{ path: '(body)', message }] } } };
 }
 
 /** Maps HttpError and body-parser errors to their status; anything else is a logged 500. */
@@ -25,26 +60,8 @@ export const errorHandler: ErrorRequestHandler = (err: unknown, req, res, _next)
       },
     };
     for (const [name, value] of Object.entries(err.headers ?? {})) res.setHeader(name, value);
-  } else if (
-    err instanceof Error &&
-    typeof (err as BodyParserError).status === 'number' &&
-    (err as BodyParserError).expose
-  ) {
-    const parserError = err as BodyParserError;
-    status = parserError.status ?? 400;
-    const code =
-      parserError.type === 'entity.too.large'
-        ? 'BODY_TOO_LARGE'
-        : parserError.type === 'entity.parse.failed'
-          ? 'INVALID_JSON'
-          : 'BAD_REQUEST';
-    const message =
-      code === 'BODY_TOO_LARGE'
-        ? 'The request body is larger than this endpoint accepts.'
-        : code === 'INVALID_JSON'
-          ? 'The request body is not valid JSON.'
-          : parserError.message;
-    body = { error: { code, message } };
+  } else if (isBodyParserError(err)) {
+    ({ status, body } = bodyParserAnswer(err));
   }
   if (status >= 500) req.log?.error({ err }, 'request failed');
   if (res.headersSent) return;

@@ -1,7 +1,8 @@
 /**
  * The upload edge of the measurements API: a multipart `file` (at most MEASUREMENT_MAX_FILE_BYTES,
  * a .csv/.tsv/.txt/.dat/.log name) with an `options` JSON part, or a JSON body
- * `{ fileName?, text, options? }` for pasted text. Multer's limits become 413/415/400 answers.
+ * `{ fileName?, text, options? }` for pasted text. Multer's limits become 400 answers
+ * naming the part at fault; a file of another type is a 415.
  */
 import type { Request, RequestHandler } from 'express';
 import multer from 'multer';
@@ -37,7 +38,7 @@ const parser = multer({
 
 const MULTER_MESSAGES: Record<string, [number, string, string]> = {
   LIMIT_FILE_SIZE: [
-    413,
+    400,
     'FILE_TOO_LARGE',
     `The file is larger than ${MAX_MB} MB; split the log into parts or log less often.`,
   ],
@@ -59,7 +60,8 @@ export const receiveCsvUpload: RequestHandler = (req, res, next) => {
         'UPLOAD_FAILED',
         `The upload could not be read (${error.message}).`,
       ];
-      return next(new HttpError(status, code, message));
+      const fields = [{ path: error.field ?? 'file', message }];
+      return next(new HttpError(status, code, message, fields));
     }
     next(error);
   });

@@ -4,6 +4,7 @@ export { DIMENSION_INFO } from './dimension';
 export { DISPLAY_UNITS, type DisplayUnit, type UnitSystem } from './display-units';
 export { formatQuantity } from './format-quantity';
 export { fromDisplay, DisplayUnitError } from './from-display';
+export { issuesFromZod } from './issues-from-zod';
 export { normaliseScenario } from './normalise-scenario';
 export { parseQuantity, type QuantityResult } from './parse-quantity';
 export { parseScenario, type ParseScenarioResult } from './parse-scenario';

@@ -195,7 +195,10 @@ describe('parseScenario', () => {
 
   it('rejects unknown fields, a wrong format and non-objects without throwing', () => {
     const result = parseScenario(withChanges({ 'vessels[1].drain.standpipe.hieght': '0.2 m' }));
-    expect(!result.success && result.issues[0]?.path).toBe('vessels[1].drain.standpipe');
+    expect(!result.success && result.issues[0]).toEqual({
+      path: 'vessels[1].drain.standpipe.hieght',
+      message: expect.stringContaining('"hieght"'),
+    });
     expect(parseScenario(withChanges({ format: 'scenario/9' }))).toMatchObject({
       success: false,
       issues: [{ path: 'format' }],
