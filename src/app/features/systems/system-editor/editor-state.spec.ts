@@ -28,6 +28,7 @@ describe('EditorState', () => {
     expect(state.issues()).toEqual([]);
     expect(state.scenario()?.vessels.map((v) => v.id)).toEqual(['tank', 'bed-a', 'bed-b']);
     expect(state.vesselIds()).toEqual(['tank', 'bed-a', 'bed-b']);
+    expect(state.bedIds()).toEqual(['bed-a', 'bed-b']);
     expect(state.pumpIds()).toEqual(['pump']);
   });
 

@@ -42,6 +42,8 @@ export class EditorState {
   );
   /** Vessel ids in file order, for the "to" and "in" pickers. */
   readonly vesselIds = computed(() => this.idsOf('vessels'));
+  /** Bed ids in file order, for the fault pickers. */
+  readonly bedIds = computed(() => this.idsOf('vessels', 'bed'));
   /** Pump ids in file order, for the schedule. */
   readonly pumpIds = computed(() => this.idsOf('pumps'));
   private readonly messages = computed(() => {
@@ -58,11 +60,13 @@ export class EditorState {
     return this.messages().get(path) ?? null;
   }
 
-  private idsOf(key: 'vessels' | 'pumps'): string[] {
+  private idsOf(key: 'vessels' | 'pumps', kind?: string): string[] {
     const list = this.document()[key];
     if (!Array.isArray(list)) return [];
     return list.flatMap((item: unknown) => {
-      const id = typeof item === 'object' && item !== null && 'id' in item ? item.id : null;
+      if (typeof item !== 'object' || item === null) return [];
+      if (kind !== undefined && !('kind' in item && item.kind === kind)) return [];
+      const id = 'id' in item ? item.id : null;
       return typeof id === 'string' && id !== '' ? [id] : [];
     });
   }

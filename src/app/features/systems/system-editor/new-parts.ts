@@ -105,6 +105,46 @@ export function newPowerCut() {
   return { at: 2 * 3600, power: 'off' };
 }
 
+/** Rounds a length to the millimetre, so starting values read cleanly in the fields. */
+function toMillimetre(lengthM: number): number {
+  return Math.round(lengthM * 1000) / 1000;
+}
+
+/**
+ * A float switch in `vessel` (`heightM` deep) that stops `pump` below half the vessel's height
+ * and lets it run again above two thirds of it.
+ */
+export function newFloatSwitch(pump: string, vessel: string, heightM: number) {
+  return {
+    kind: 'float-switch',
+    pump,
+    vessel,
+    stopBelow: toMillimetre(heightM / 2),
+    restartAbove: toMillimetre((heightM * 2) / 3),
+  };
+}
+
+/** A drain of `bed` half blocked (roots, fines, a snail in the standpipe). */
+export function newBlockedDrain(bed: string) {
+  return { kind: 'drain-blocked', bed, fraction: 0.5 };
+}
+
+/** A worn `pump` giving 80 % of its datasheet flow. */
+export function newWornPump(pump: string) {
+  return { kind: 'pump-worn', pump, flowScale: 0.8 };
+}
+
+/** A level-to-area table with the same plan area `areaM2` at the floor and at the rim. */
+export function newAreaTable(areaM2: number, heightM: number) {
+  return {
+    type: 'table',
+    points: [
+      { level: 0, area: areaM2 },
+      { level: heightM, area: areaM2 },
+    ],
+  };
+}
+
 /** The first id of the form `<stem>-<n>` not in `taken`. */
 export function freshId(stem: string, taken: readonly string[]): string {
   for (let n = 1; ; n++) {

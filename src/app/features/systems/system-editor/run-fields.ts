@@ -4,11 +4,21 @@ import { MatFormFieldModule } from '@angular/material/form-field';
 import { MatSelectModule } from '@angular/material/select';
 import { QuantityInput } from '../../../ui/quantity-input/quantity-input';
 import { EditorSection } from './editor-section';
+import { LossCoefficientFields } from './loss-coefficient-fields';
 
-/** Water temperature and how to run: simulated duration, output spacing, friction model. */
+/**
+ * Water temperature and how to run: simulated duration, output spacing, friction model and the
+ * fittings' loss coefficients.
+ */
 @Component({
   selector: 'tw-run-fields',
-  imports: [MatFormFieldModule, MatSelectModule, QuantityInput, ReactiveFormsModule],
+  imports: [
+    LossCoefficientFields,
+    MatFormFieldModule,
+    MatSelectModule,
+    QuantityInput,
+    ReactiveFormsModule,
+  ],
   template: `
     <div [formGroup]="group()">
       <div class="row" formGroupName="water">
@@ -49,6 +59,7 @@ import { EditorSection } from './editor-section';
         </mat-form-field>
       </div>
     </div>
+    <tw-loss-coefficient-fields [group]="group()" [path]="path()" />
   `,
   styleUrl: './editor-fields.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

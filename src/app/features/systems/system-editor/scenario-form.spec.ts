@@ -22,6 +22,15 @@ describe('the scenario form', () => {
     expect(form.get(['pumps', 0, 'outlets', 0, 'pipe', 'fittings', 'teeRun'])?.value).toBe(0);
   });
 
+  it('offers empty loss-coefficient overrides and empty lists of float switches and faults', () => {
+    const form = toControl(editableScenario(EXAMPLE_TWO_BED_SCENARIO)) as DynamicGroup;
+    expect(form.get(['lossCoefficients', 'elbow90'])?.value).toBeNull();
+    expect(form.get(['lossCoefficients', 'bellReturn'])?.value).toBeNull();
+    expect(form.get('controls')?.value).toEqual([]);
+    expect(form.get('faults')?.value).toEqual([]);
+    expect(documentFromForm(form.getRawValue())['lossCoefficients']).toEqual({});
+  });
+
   it('gives back a document the shared schema accepts, leaving empty fields to their defaults', () => {
     const form = toControl(editableScenario(EXAMPLE_TWO_BED_SCENARIO)) as DynamicGroup;
     const document = documentFromForm(form.getRawValue());

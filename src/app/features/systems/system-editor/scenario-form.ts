@@ -1,5 +1,5 @@
 import { type AbstractControl, FormArray, FormControl, FormGroup } from '@angular/forms';
-import { ScenarioFieldsSchema } from '../../../../../shared/scenario';
+import { SCENARIO_DEFAULTS, ScenarioFieldsSchema } from '../../../../../shared/scenario';
 
 /** A form group whose children are known only at run time (the scenario's shape varies). */
 export type DynamicGroup = FormGroup<Record<string, AbstractControl>>;
@@ -15,6 +15,7 @@ const OPTIONAL_FIELDS = {
   bell: ['slotCount', 'slotWidth'],
   media: ['porosity', 'depth'],
   pipe: ['material'],
+  lossCoefficients: Object.keys(SCENARIO_DEFAULTS.lossCoefficients),
 } as const;
 
 /**
@@ -31,7 +32,10 @@ export function editableScenario(document: unknown): Record<string, Json> {
   fill(copy['water'], ['temperature']);
   copy['run'] = isObject(copy['run']) ? copy['run'] : {};
   fill(copy['run'], ['duration', 'outputInterval', 'friction']);
-  for (const key of ['leaks', 'schedule']) copy[key] = Array.isArray(copy[key]) ? copy[key] : [];
+  for (const key of ['leaks', 'schedule', 'controls', 'faults'])
+    copy[key] = Array.isArray(copy[key]) ? copy[key] : [];
+  copy['lossCoefficients'] = isObject(copy['lossCoefficients']) ? copy['lossCoefficients'] : {};
+  fill(copy['lossCoefficients'], OPTIONAL_FIELDS.lossCoefficients);
   for (const vessel of asObjects(copy['vessels'])) {
     fill(vessel, OPTIONAL_FIELDS.vessel);
     if (vessel['kind'] !== 'bed') continue;

@@ -37,8 +37,10 @@ import { ElevationDrawing } from '../elevation-drawing/elevation-drawing';
 import { SystemsApi } from '../systems-api';
 import { UnitToggle } from '../unit-toggle';
 import { scenarioErrorStateMatcher } from './editor-section';
+import { ControlFields } from './control-fields';
 import { EditorState } from './editor-state';
 import { EventsFields } from './events-fields';
+import { FaultFields } from './fault-fields';
 import { LiveVerdict } from './live-verdict';
 import { PumpList } from './pump-list';
 import { RunFields } from './run-fields';
@@ -62,8 +64,10 @@ const BROWSER_MAX_SAMPLES = 800;
 @Component({
   selector: 'tw-system-editor',
   imports: [
+    ControlFields,
     ElevationDrawing,
     EventsFields,
+    FaultFields,
     LiveVerdict,
     MatButtonModule,
     MatExpansionModule,
