@@ -226,4 +226,39 @@ describe('SystemEditor', { timeout: 30_000 }, () => {
       'vessels[1].drain.standpipe.height',
     );
   });
+
+  it('saves a float switch added on its tab, its levels in metres', async () => {
+    const { fixture, http, root } = await render();
+    const tab = [...root.querySelectorAll<HTMLElement>('[role=tab]')].find((candidate) =>
+      candidate.textContent?.includes('Switches and faults'),
+    );
+    tab?.click();
+    await fixture.whenStable();
+    const add = [...root.querySelectorAll<HTMLButtonElement>('button')].find((b) =>
+      b.textContent?.includes('Add a float switch'),
+    );
+    add?.click();
+    await fixture.whenStable();
+    const levelField = (label: string) => {
+      const input = [...root.querySelectorAll('tw-quantity-input')]
+        .find((q) => q.querySelector('mat-label')?.textContent?.trim() === label)
+        ?.querySelector('input');
+      if (!input) throw new Error(`No "${label}" field.`);
+      return input;
+    };
+    for (const [label, text] of [
+      ['Stops below', '30 cm'],
+      ['Restarts above', '0.45'],
+    ] as const) {
+      levelField(label).value = text;
+      levelField(label).dispatchEvent(new Event('input'));
+    }
+    fixture.detectChanges();
+    root.querySelector<HTMLButtonElement>('button.save')?.click();
+    const put = http.expectOne({ method: 'PUT', url: `/api/systems/${ID}` });
+    const body = put.request.body as { scenario: { controls?: unknown[] } };
+    expect(body.scenario.controls).toEqual([
+      { kind: 'float-switch', pump: 'pump', vessel: 'tank', stopBelow: 0.3, restartAbove: 0.45 },
+    ]);
+  });
 });
