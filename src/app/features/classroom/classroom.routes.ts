@@ -26,6 +26,12 @@ export const classroomRoutes: Routes = [
     title: 'Lesson · Tidewright',
   },
   {
+    path: 'lessons/:lessonId/edit',
+    canActivate: [roleGuard('instructor', 'admin')],
+    loadComponent: () => import('./lesson-editor/lesson-editor').then((m) => m.LessonEditor),
+    title: 'Edit lesson · Tidewright',
+  },
+  {
     path: 'lessons/:lessonId/present',
     loadComponent: () =>
       import('./presentation/lesson-presentation').then((m) => m.LessonPresentation),
