@@ -5,7 +5,12 @@ import type {
   RunSettings,
 } from '../../shared/scenario';
 import { formatSignificant as fmt } from '../results/format-significant';
-import type { ModelComponent, ModelContext, SwitchInput } from '../system/model-context';
+import {
+  switchDue,
+  type ModelComponent,
+  type ModelContext,
+  type SwitchInput,
+} from '../system/model-context';
 import { STANDARD_GRAVITY_M_PER_S2 as G } from '../hydraulics/standard-gravity';
 import { bellSpillFlowM3PerS, rimControlHeadM } from './bell-spill-flow';
 import { primingFlowM3PerS } from './siphon-flow';
@@ -149,10 +154,9 @@ function writeBellEvents(c: BellSiphonComponent, ctx: ModelContext, out: Float64
 function switchBellPhase(c: BellSiphonComponent, input: SwitchInput): boolean {
   const { ctx, fired } = input;
   const o = c.eventOffset;
-  const due = (k: number, g: number): boolean => g < 0 || (g <= 0 && fired[o + k] === 1);
   const level = ctx.levelM[c.wiring.bed.index] as number;
   const crest = c.drain.standpipe.height;
-  if (c.phase === 'filling' && due(SPILL_START, crest - level)) {
+  if (c.phase === 'filling' && switchDue(fired, o + SPILL_START, crest - level)) {
     enterPhase(c, input, 'spilling');
     input.log({
       t_s: ctx.timeS,
@@ -163,11 +167,14 @@ function switchBellPhase(c: BellSiphonComponent, input: SwitchInput): boolean {
     });
     return true;
   }
-  if (c.phase === 'spilling' && due(PRIME, c.primingFlowM3PerS - c.spillFlowAtLevel(level))) {
+  if (
+    c.phase === 'spilling' &&
+    switchDue(fired, o + PRIME, c.primingFlowM3PerS - c.spillFlowAtLevel(level))
+  ) {
     prime(c, input, level);
     return true;
   }
-  if (c.phase === 'spilling' && due(SPILL_END, level - crest)) {
+  if (c.phase === 'spilling' && switchDue(fired, o + SPILL_END, level - crest)) {
     enterPhase(c, input, 'filling');
     input.log({
       t_s: ctx.timeS,
@@ -178,12 +185,15 @@ function switchBellPhase(c: BellSiphonComponent, input: SwitchInput): boolean {
     });
     return true;
   }
-  if (c.phase === 'siphoning' && due(BREAK, level - c.breakLevelM)) {
+  if (c.phase === 'siphoning' && switchDue(fired, o + BREAK, level - c.breakLevelM)) {
     breakSiphon(c, input, level);
     return true;
   }
   const overRim = level - crest - c.rimControlHeadM;
-  if (c.phase === 'spilling' && due(RIM_CONTROL, c.boreControls ? overRim : -overRim)) {
+  if (
+    c.phase === 'spilling' &&
+    switchDue(fired, o + RIM_CONTROL, c.boreControls ? overRim : -overRim)
+  ) {
     c.boreControls = !c.boreControls;
     return true;
   }

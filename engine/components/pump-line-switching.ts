@@ -1,5 +1,5 @@
 import { formatSignificant as fmt } from '../results/format-significant';
-import type { ModelContext, SwitchInput } from '../system/model-context';
+import { switchDue, type ModelContext, type SwitchInput } from '../system/model-context';
 import type { PumpLineComponent } from './pump-line';
 
 /**
@@ -62,9 +62,11 @@ export function switchPumpLine(c: PumpLineComponent, input: SwitchInput): boolea
 function switchWhileWanted(c: PumpLineComponent, input: SwitchInput): boolean {
   const { ctx, fired, state } = input;
   const o = c.eventOffset;
-  const due = (k: number, g: number): boolean => g < 0 || (g <= 0 && fired[o + k] === 1);
   const source = c.wiring.source;
-  if (c.running && due(DRY, (ctx.levelM[source.index] as number) - c.pump.intakeHeight)) {
+  if (
+    c.running &&
+    switchDue(fired, o + DRY, (ctx.levelM[source.index] as number) - c.pump.intakeHeight)
+  ) {
     setDry(c, true, ctx.timeS);
     input.log({
       t_s: ctx.timeS,
@@ -79,7 +81,11 @@ function switchWhileWanted(c: PumpLineComponent, input: SwitchInput): boolean {
   if (
     !c.running &&
     c.dry &&
-    due(RESTART, startVolumeM3(c, DRY_RESTART_MARGIN_M) - (state[source.index] as number))
+    switchDue(
+      fired,
+      o + RESTART,
+      startVolumeM3(c, DRY_RESTART_MARGIN_M) - (state[source.index] as number),
+    )
   ) {
     tryStart(c, input, 'pump-restart');
     return true;

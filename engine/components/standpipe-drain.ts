@@ -6,7 +6,12 @@ import type {
 } from '../../shared/scenario';
 import { torricelliOutflowM3PerS } from '../hydraulics/torricelli-outflow';
 import { formatSignificant as fmt } from '../results/format-significant';
-import type { ModelComponent, ModelContext, SwitchInput } from '../system/model-context';
+import {
+  switchDue,
+  type ModelComponent,
+  type ModelContext,
+  type SwitchInput,
+} from '../system/model-context';
 import { bellSpillFlowM3PerS, rimControlHeadM } from './bell-spill-flow';
 import { orificeDryEventValue } from './orifice-run-dry';
 import { makeSiphonFlowFunction } from './siphon-flow-table';
@@ -126,10 +131,9 @@ function writeStandpipeFlows(c: StandpipeComponent, ctx: ModelContext): void {
 function switchStandpipePhase(c: StandpipeComponent, input: SwitchInput): boolean {
   const { ctx, fired } = input;
   const o = c.eventOffset;
-  const due = (k: number, g: number): boolean => g < 0 || (g <= 0 && fired[o + k] === 1);
   const level = ctx.levelM[c.wiring.bed.index] as number;
   const crest = c.drain.standpipe.height;
-  if (c.phase === 'filling' && due(SPILL_START, crest - level)) {
+  if (c.phase === 'filling' && switchDue(fired, o + SPILL_START, crest - level)) {
     c.phase = 'spilling';
     c.phaseStartS = ctx.timeS;
     input.log({
@@ -141,7 +145,7 @@ function switchStandpipePhase(c: StandpipeComponent, input: SwitchInput): boolea
     });
     return true;
   }
-  if (c.phase === 'spilling' && due(SPILL_END, level - crest)) {
+  if (c.phase === 'spilling' && switchDue(fired, o + SPILL_END, level - crest)) {
     c.floodedTimeS += ctx.timeS - c.phaseStartS;
     c.phase = 'filling';
     c.phaseStartS = ctx.timeS;
@@ -156,11 +160,17 @@ function switchStandpipePhase(c: StandpipeComponent, input: SwitchInput): boolea
     return true;
   }
   const overRim = level - crest - c.rimControlHeadM;
-  if (c.phase === 'spilling' && due(RIM_CONTROL, c.boreControls ? overRim : -overRim)) {
+  if (
+    c.phase === 'spilling' &&
+    switchDue(fired, o + RIM_CONTROL, c.boreControls ? overRim : -overRim)
+  ) {
     c.boreControls = !c.boreControls;
     return true;
   }
-  if (c.drain.weepHole !== undefined && due(WEEP_DRY, orificeDryEventValue(c.weepDry, level))) {
+  if (
+    c.drain.weepHole !== undefined &&
+    switchDue(fired, o + WEEP_DRY, orificeDryEventValue(c.weepDry, level))
+  ) {
     c.weepDry = !c.weepDry;
     return true;
   }

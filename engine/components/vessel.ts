@@ -1,5 +1,10 @@
 import type { Vessel } from '../../shared/scenario';
-import type { ModelComponent, ModelContext, SwitchInput } from '../system/model-context';
+import {
+  switchDue,
+  type ModelComponent,
+  type ModelContext,
+  type SwitchInput,
+} from '../system/model-context';
 import { formatSignificant as fmt } from '../results/format-significant';
 import { makeStorage, type Storage } from './vessel-storage';
 
@@ -97,12 +102,11 @@ function switchVesselModes(c: VesselComponent, input: SwitchInput): boolean {
   const { ctx, fired, state, log } = input;
   const o = c.eventOffset;
   const t = ctx.timeS;
-  const due = (k: number, g: number): boolean => g < 0 || (g <= 0 && fired[o + k] === 1);
   let changed = spillAboveRim(c, input, fired[o + BRIM_ENTER] === 1);
   const volume = state[c.index] as number;
   const net = ctx.netInflowM3PerS[c.index] as number;
   const level = ctx.levelM[c.index] as number;
-  if (!c.brimful && due(BRIM_ENTER, c.geometry.rimVolumeM3 - volume) && net > 0) {
+  if (!c.brimful && switchDue(fired, o + BRIM_ENTER, c.geometry.rimVolumeM3 - volume) && net > 0) {
     c.brimful = true;
     changed = true;
     log({
@@ -112,18 +116,18 @@ function switchVesselModes(c: VesselComponent, input: SwitchInput): boolean {
       detail: `${c.vessel.id} is full to its rim (${fmt(c.vessel.height)} m) and spills over it; the water is lost.`,
       values: { inflowM3PerS: net },
     });
-  } else if (c.brimful && due(BRIM_EXIT, net)) {
+  } else if (c.brimful && switchDue(fired, o + BRIM_EXIT, net)) {
     c.brimful = false;
     changed = true;
   }
-  if (!c.empty && due(EMPTY_ENTER, volume) && net < 0) {
+  if (!c.empty && switchDue(fired, o + EMPTY_ENTER, volume) && net < 0) {
     c.empty = true;
     changed = true;
-  } else if (c.empty && due(EMPTY_EXIT, -net)) {
+  } else if (c.empty && switchDue(fired, o + EMPTY_EXIT, -net)) {
     c.empty = false;
     changed = true;
   }
-  return switchObservations(c, input, level, due) || changed;
+  return switchObservations(c, input, level) || changed;
 }
 
 /**
@@ -148,19 +152,17 @@ function spillAboveRim(c: VesselComponent, input: SwitchInput, rimEventFired: bo
   return true;
 }
 
-function switchObservations(
-  c: VesselComponent,
-  input: SwitchInput,
-  level: number,
-  due: (k: number, g: number) => boolean,
-): boolean {
-  const { ctx, log } = input;
+function switchObservations(c: VesselComponent, input: SwitchInput, level: number): boolean {
+  const { ctx, log, fired } = input;
+  const o = c.eventOffset;
   const t = ctx.timeS;
   let changed = false;
   const min = c.vessel.minLevel;
   if (
     min !== undefined &&
-    (c.belowMin ? due(MIN_LEVEL, min - level) : due(MIN_LEVEL, level - min))
+    (c.belowMin
+      ? switchDue(fired, o + MIN_LEVEL, min - level)
+      : switchDue(fired, o + MIN_LEVEL, level - min))
   ) {
     c.belowMin = !c.belowMin;
     changed = true;
@@ -178,8 +180,8 @@ function switchObservations(
   if (
     overflow !== undefined &&
     (c.aboveOverflow
-      ? due(OVERFLOW, surface - overflow.elevation)
-      : due(OVERFLOW, overflow.elevation - surface))
+      ? switchDue(fired, o + OVERFLOW, surface - overflow.elevation)
+      : switchDue(fired, o + OVERFLOW, overflow.elevation - surface))
   ) {
     c.aboveOverflow = !c.aboveOverflow;
     changed = true;

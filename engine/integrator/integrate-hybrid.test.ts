@@ -227,4 +227,43 @@ describe('integrateHybrid', () => {
     expect(outcome.stats.rhsEvaluations).toBeGreaterThanOrEqual(5 * outcome.stats.steps);
     expect(outcome.stats.rejected).toBeGreaterThanOrEqual(0);
   });
+
+  it('takes an event the step interpolant placed a little early without another full step past it', () => {
+    // A draining tank, y′ = −√y from y = 1, reaches y = 0.1 at t = 2(1 − √0.1) (closed form of
+    // Torricelli drainage). At this tolerance the cubic interpolant puts the crossing slightly
+    // before the integrated one, so the first cut stops just short of the event.
+    const eventS = 2 * (1 - Math.sqrt(0.1));
+    let drained = false;
+    const evaluatedAtS: number[] = [];
+    let transitionS = Number.NaN;
+    const system: HybridSystem = {
+      stateSize: 1,
+      eventCount: 1,
+      derivative: (out, y, t) => {
+        if (!drained) evaluatedAtS.push(t);
+        out[0] = drained ? 0 : -Math.sqrt(Math.max(0, y[0] as number));
+      },
+      eventValues: (out, y) => {
+        out[0] = drained ? 1 : (y[0] as number) - 0.1;
+      },
+      nextTimedTransitionS: () => Infinity,
+      transition: (t, _y, fired) => {
+        if (fired.length === 0) return;
+        drained = true;
+        transitionS = t;
+      },
+    };
+    integrateHybrid(
+      system,
+      new Float64Array([1]),
+      settings({ relativeTolerance: 1e-8, errorFloor: new Float64Array([1e-3]), maxStepS: 5 }),
+      silent,
+    );
+    expect(Math.abs(transitionS - eventS)).toBeLessThan(1e-7);
+    // The step that detected the event looks past it (its stages and end evaluation); a second
+    // full step past it (another six evaluations) is the waste this guards against.
+    const pastEvent = evaluatedAtS.filter((t) => t > transitionS + 1e-9);
+    expect(pastEvent.length).toBeGreaterThan(0);
+    expect(pastEvent.length).toBeLessThan(12);
+  });
 });

@@ -34,6 +34,8 @@ export function integrateHybrid(
 class HybridRun {
   private readonly stepper: CashKarpStepper;
   private readonly segment: StepSegment;
+  /** The rest of a step that overshot an event: from the located time to the step's end. */
+  private readonly remainder: StepSegment;
   private readonly scratchState: Float64Array;
   private readonly gValues: Float64Array;
   private readonly gScratch: Float64Array;
@@ -53,6 +55,8 @@ class HybridRun {
   private tinySteps = 0;
   private extraEvaluations = 0;
   private naturalStepS = 0;
+  /** True after a cut that stopped just short of its event: the next step is a short follow-up. */
+  private shortOfEvent = false;
   private readonly firedScratch: number[] = [];
   private readonly restartSteps: RestartStepMemory;
 
@@ -65,6 +69,7 @@ class HybridRun {
     const n = system.stateSize;
     this.stepper = makeCashKarpStepper((out, y, t) => system.derivative(out, y, t), n, settings);
     this.segment = makeStepSegment(n);
+    this.remainder = makeStepSegment(n);
     this.scratchState = new Float64Array(n);
     this.y = Float64Array.from(initialState);
     this.f = new Float64Array(n);
@@ -113,13 +118,15 @@ class HybridRun {
     const limitS = Math.min(this.settings.endS, this.system.nextTimedTransitionS(this.timeS));
     const seg = this.takeStep(limitS);
     let fired = this.firedEvents(seg.y1, seg.t1S);
-    this.naturalStepS = this.stepper.nextStepS;
+    // A short follow-up step after a cut says nothing about the time scale of the motion: keep
+    // the step size from before the cut for the restart after the event.
+    if (!this.shortOfEvent) this.naturalStepS = this.stepper.nextStepS;
+    this.shortOfEvent = false;
     if (fired.length === 0) {
       this.restartSteps.noteAccepted(seg, limitS);
       this.accept(seg);
     } else {
-      this.reintegrateTo(this.locateEarliest(seg, fired));
-      fired = this.firedEvents(this.y, this.timeS);
+      fired = this.cutAtEarliestEvent(seg, fired);
     }
     const timedDue = this.timeS === limitS && limitS < this.settings.endS;
     if (fired.length > 0 || timedDue)
@@ -204,10 +211,40 @@ class HybridRun {
     return earliestS;
   }
 
-  /** Integrates again from the segment start exactly to `eventS`, reporting each piece. */
+  /**
+   * Integrates from the current point to the earliest crossing located in a step that fired
+   * events, and returns the events fired there. The crossing was located on the step's cubic
+   * interpolant, which differs from the integrated solution by the interpolation error, so the
+   * integrated state may stop just short of it. Then the crossing is located again on the
+   * remainder of the step (from the point reached to the step's end, an interval so short that
+   * its interpolant is far more accurate) and one more short piece is integrated; only if that
+   * misses too does the next ordinary step find the event.
+   */
+  private cutAtEarliestEvent(seg: StepSegment, fired: readonly number[]): number[] {
+    const rest = this.remainder;
+    rest.t1S = seg.t1S;
+    rest.y1.set(seg.y1);
+    rest.f1.set(seg.f1);
+    this.reintegrateTo(this.locateEarliest(seg, fired));
+    const firedHere = this.firedEvents(this.y, this.timeS);
+    if (firedHere.length > 0 || this.timeS >= rest.t1S) return firedHere;
+    rest.t0S = this.timeS;
+    rest.y0.set(this.y);
+    rest.f0.set(this.f);
+    const firedAtEnd = this.firedEvents(rest.y1, rest.t1S);
+    if (firedAtEnd.length === 0) {
+      this.shortOfEvent = true;
+      return this.firedEvents(this.y, this.timeS);
+    }
+    this.reintegrateTo(this.locateEarliest(rest, firedAtEnd.slice()));
+    const firedAfter = this.firedEvents(this.y, this.timeS);
+    this.shortOfEvent = firedAfter.length === 0;
+    return firedAfter;
+  }
+
+  /** Integrates again from the current point exactly to `eventS`, reporting each piece. */
   private reintegrateTo(eventS: number): void {
-    const seg = this.segment;
-    this.stepper.reset(seg.t0S, seg.y0, seg.f0, eventS - seg.t0S);
+    this.stepper.reset(this.timeS, this.y, this.f, eventS - this.timeS);
     while (this.timeS < eventS) {
       const piece = this.takeStep(eventS);
       this.gValues.fill(-1);

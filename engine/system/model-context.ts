@@ -45,6 +45,14 @@ export interface SwitchInput {
 }
 
 /**
+ * Whether a switch whose event function `g` is at `g` applies now: when g is below zero, or at
+ * zero when its event `index` (global numbering) fired this instant.
+ */
+export function switchDue(fired: Uint8Array, index: number, g: number): boolean {
+  return g < 0 || (g <= 0 && fired[index] === 1);
+}
+
+/**
  * A part of the system model: it contributes flows on its channels, event functions, and mode
  * switches. Switch conditions are strict inequalities unless the matching event fired, so two
  * opposite switches can never both apply at the same state.

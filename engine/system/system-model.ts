@@ -126,7 +126,7 @@ export class SystemModel implements HybridSystem {
     let changed = false;
     const input: SwitchInput = { ctx: this.ctx, fired: this.fired, state: y, log: this.log };
     for (const component of this.parts.components) {
-      if (dirty) this.evaluate(y, timeS);
+      if (dirty) this.flowsAt(y, timeS);
       dirty = component.switchModes(input);
       if (dirty) {
         changed = true;
