@@ -107,10 +107,24 @@ test('the demo member edits the greenhouse, sees the drawing and live verdict fo
   // A second run with the standpipe changed again, then the two compared.
   await page.goto(`/systems/${systemId}`);
   await expect(liveBeds).toContainText('floods and drains', { timeout: 15_000 });
-  await setStandpipeHeight(page, 1.15);
-  await page.getByRole('button', { name: 'Save', exact: true }).click();
-  await expect(page.getByText('Saved', { exact: true })).toBeVisible();
-  const secondRun = await runAndOpen(page);
+  // Typed and clicked at once, as a hurried user would: Save and run must save what was typed.
+  const field = page.getByLabel('Standpipe height').first();
+  await page.getByRole('tab', { name: 'Beds' }).click();
+  const typedM = Number((Number(await field.inputValue()) * 1.15).toPrecision(3));
+  await field.fill(String(typedM));
+  const saved = page.waitForResponse(
+    (response) => response.request().method() === 'PUT' && /\/api\/systems\//.test(response.url()),
+  );
+  await page.getByRole('button', { name: 'Save and run', exact: true }).click();
+  const savedScenario = (await (await saved).request().postDataJSON()) as {
+    scenario: { vessels: { kind: string; drain?: { standpipe: { height: number } } }[] };
+  };
+  const savedHeights = savedScenario.scenario.vessels.flatMap((vessel) =>
+    vessel.drain ? [vessel.drain.standpipe.height] : [],
+  );
+  expect(savedHeights).toContain(typedM);
+  await expect(page).toHaveURL(/\/runs\/[0-9a-f-]{36}$/, { timeout: 60_000 });
+  const secondRun = page.url().split('/').pop() ?? '';
   expect(secondRun).not.toBe(firstRun);
   await page.goto(`/systems/${systemId}/runs`);
   // Other browser tests may have run this system too: pick this test's two runs by their links.
