@@ -1,4 +1,6 @@
 import type { Scenario } from '../../shared/scenario';
+import { frictionPipes } from './friction-pipes';
+import { hazenWilliamsRangeVerdicts } from './hazen-williams-range-verdicts';
 import type { BedSummary, PumpSummary, Verdict, VesselSummary } from './run-result';
 
 const PRACTICE = 'common practice';
@@ -161,6 +163,7 @@ function modelVerdicts({ scenario, massBalanceError }: VerdictInputs): Verdict[]
       source:
         'Hazen–Williams is fitted to water near room temperature in larger pipes; Darcy–Weisbach is the default',
     });
+    verdicts.push(...hazenWilliamsRangeVerdicts(frictionPipes(scenario)));
   }
   return verdicts;
 }
