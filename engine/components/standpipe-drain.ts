@@ -52,6 +52,8 @@ export interface StandpipeComponent extends ModelComponent {
   /** Head over the rim where the bore takes over from the rim weir, m; and which side the level is on. */
   readonly rimControlHeadM: number;
   boreControls: boolean;
+  /** True while the drain pipe's full-bore capacity, not the rim, limits the spill. */
+  pipeLimits: boolean;
   /** The bed has drained to its weep hole (run dry, see ORIFICE_DRY_HEAD_M). */
   weepDry: boolean;
 }
@@ -60,6 +62,7 @@ const SPILL_START = 0;
 const SPILL_END = 1;
 const RIM_CONTROL = 2;
 const WEEP_DRY = 3;
+const PIPE_LIMIT = 4;
 
 /** Creates the standpipe drain of `bed`. */
 export function makeStandpipeDrain(
@@ -83,8 +86,9 @@ export function makeStandpipeDrain(
     ),
     rimControlHeadM: rimControlHeadM(bed.drain.standpipe),
     boreControls: false,
+    pipeLimits: false,
     weepDry: bed.initialLevel <= 0,
-    eventCount: 4,
+    eventCount: 5,
     eventOffset: 0,
     computeFlows: (ctx) => writeStandpipeFlows(c, ctx),
     eventValues: (ctx, out) => {
@@ -97,27 +101,43 @@ export function makeStandpipeDrain(
         c.phase !== 'spilling' ? 1 : c.boreControls ? overRim : -overRim;
       out[c.eventOffset + WEEP_DRY] =
         c.drain.weepHole === undefined ? 1 : orificeDryEventValue(c.weepDry, level);
+      out[c.eventOffset + PIPE_LIMIT] = c.phase !== 'spilling' ? 1 : pipeLimitEventValue(c, ctx);
     },
     switchModes: (input) => switchStandpipePhase(c, input),
   };
   return c;
 }
 
+/** Spill over the rim (weir or bore, by mode) at bed level `levelM`, m³/s. */
+function rimSpillM3PerS(c: StandpipeComponent, levelM: number): number {
+  return bellSpillFlowM3PerS(c.drain.standpipe, levelM - c.drain.standpipe.height, c.boreControls);
+}
+
+/** Full-bore capacity of standpipe and drain pipe from the bed surface, m³/s. */
+function pipeCapacityM3PerS(c: StandpipeComponent, ctx: ModelContext, levelM: number): number {
+  const { bed, destination } = c.wiring;
+  const tailM = Math.max(c.drain.outletElevation, ctx.surfaceM[destination.index] as number);
+  return c.fullBoreFlowM3PerS(bed.vessel.floorElevation + levelM - tailM);
+}
+
+/**
+ * The spill is the smaller of the rim's flow and the pipe's capacity; the switch between them is
+ * an event (capacity minus rim flow while the rim limits, the reverse while the pipe does), so
+ * the spill has no kink between events.
+ */
+function pipeLimitEventValue(c: StandpipeComponent, ctx: ModelContext): number {
+  const level = ctx.levelM[c.wiring.bed.index] as number;
+  const margin = pipeCapacityM3PerS(c, ctx, level) - rimSpillM3PerS(c, level);
+  return c.pipeLimits ? -margin : margin;
+}
+
 function writeStandpipeFlows(c: StandpipeComponent, ctx: ModelContext): void {
-  const { bed, destination, spillChannel, weepChannel, blockedFraction } = c.wiring;
+  const { bed, spillChannel, weepChannel, blockedFraction } = c.wiring;
   const level = ctx.levelM[bed.index] as number;
   const open = 1 - blockedFraction;
   let spill = 0;
-  if (c.phase === 'spilling') {
-    const rim = bellSpillFlowM3PerS(
-      c.drain.standpipe,
-      level - c.drain.standpipe.height,
-      c.boreControls,
-    );
-    const tailM = Math.max(c.drain.outletElevation, ctx.surfaceM[destination.index] as number);
-    const headDropM = bed.vessel.floorElevation + level - tailM;
-    spill = Math.min(rim, c.fullBoreFlowM3PerS(headDropM));
-  }
+  if (c.phase === 'spilling')
+    spill = c.pipeLimits ? pipeCapacityM3PerS(c, ctx, level) : rimSpillM3PerS(c, level);
   ctx.flowM3PerS[spillChannel] = spill * open;
   const weep = c.drain.weepHole;
   if (weep !== undefined && weepChannel >= 0) {
@@ -150,6 +170,7 @@ function switchStandpipePhase(c: StandpipeComponent, input: SwitchInput): boolea
     c.phase = 'filling';
     c.phaseStartS = ctx.timeS;
     c.boreControls = false;
+    c.pipeLimits = false;
     input.log({
       t_s: ctx.timeS,
       kind: 'spill-end',
@@ -165,6 +186,10 @@ function switchStandpipePhase(c: StandpipeComponent, input: SwitchInput): boolea
     switchDue(fired, o + RIM_CONTROL, c.boreControls ? overRim : -overRim)
   ) {
     c.boreControls = !c.boreControls;
+    return true;
+  }
+  if (c.phase === 'spilling' && switchDue(fired, o + PIPE_LIMIT, pipeLimitEventValue(c, ctx))) {
+    c.pipeLimits = !c.pipeLimits;
     return true;
   }
   if (
