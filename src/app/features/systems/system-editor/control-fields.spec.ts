@@ -19,6 +19,15 @@ describe('ControlFields', () => {
     ]);
   });
 
+  it('starts a new switch as a cut-off 5 cm above the pump intake that restarts 5 cm higher', async () => {
+    const view = await renderSection(ControlFields);
+    await view.click('Add a float switch');
+    // The example pump draws from the tank through an intake 0.30 m above its floor.
+    expect(view.state.scenario()?.controls).toEqual([
+      { kind: 'float-switch', pump: 'pump', vessel: 'tank', stopBelow: 0.35, restartAbove: 0.4 },
+    ]);
+  });
+
   it('reads a level typed in inches into metres', async () => {
     const view = await renderSection(ControlFields);
     await view.click('Add a float switch');

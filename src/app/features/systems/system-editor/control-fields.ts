@@ -28,14 +28,22 @@ import { toControl } from './scenario-form';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class ControlFields extends EditorSection {
-  /** Adds a switch on the first pump, floating in the vessel that pump draws from. */
+  /** Adds a low-water cut-off on the first pump, floating in the vessel that pump draws from. */
   protected addFloatSwitch(): void {
     const pump = this.list('pumps').at(0);
     const vesselId = String(pump?.get('in')?.value ?? this.state.vesselIds()[0] ?? 'tank');
     const vessel = this.list('vessels').controls.find((v) => v.get('id')?.value === vesselId);
     const heightM = Number(vessel?.get('height')?.value ?? 0.6);
+    const intake = Number(pump?.get('intakeHeight')?.value);
     this.list('controls').push(
-      toControl(newFloatSwitch(String(pump?.get('id')?.value ?? ''), vesselId, heightM)),
+      toControl(
+        newFloatSwitch(
+          String(pump?.get('id')?.value ?? ''),
+          vesselId,
+          heightM,
+          Number.isFinite(intake) ? intake : undefined,
+        ),
+      ),
     );
   }
 

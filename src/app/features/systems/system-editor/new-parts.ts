@@ -110,17 +110,28 @@ function toMillimetre(lengthM: number): number {
   return Math.round(lengthM * 1000) / 1000;
 }
 
+/** Height of a new float switch's stop level above the pump intake, m. Common practice, no source. */
+const SWITCH_ABOVE_INTAKE_M = 0.05;
+/** Gap between a new float switch's stop and restart levels, m. Common practice, no source. */
+const SWITCH_DIFFERENTIAL_M = 0.05;
+
 /**
- * A float switch in `vessel` (`heightM` deep) that stops `pump` below half the vessel's height
- * and lets it run again above two thirds of it.
+ * A low-water cut-off for `pump` floating in `vessel` (`heightM` deep) from which the pump draws
+ * at `intakeM` above the floor: it stops the pump 5 cm above the intake, before the pump runs
+ * dry, and lets it run again 5 cm higher. Where that does not fit below the rim, it stops below
+ * half the vessel's height and restarts above two thirds of it.
  */
-export function newFloatSwitch(pump: string, vessel: string, heightM: number) {
+export function newFloatSwitch(pump: string, vessel: string, heightM: number, intakeM?: number) {
+  const fits =
+    intakeM !== undefined && intakeM + SWITCH_ABOVE_INTAKE_M + SWITCH_DIFFERENTIAL_M < heightM;
+  const stopM = fits ? intakeM + SWITCH_ABOVE_INTAKE_M : heightM / 2;
+  const restartM = fits ? stopM + SWITCH_DIFFERENTIAL_M : (heightM * 2) / 3;
   return {
     kind: 'float-switch',
     pump,
     vessel,
-    stopBelow: toMillimetre(heightM / 2),
-    restartAbove: toMillimetre((heightM * 2) / 3),
+    stopBelow: toMillimetre(stopM),
+    restartAbove: toMillimetre(restartM),
   };
 }
 
