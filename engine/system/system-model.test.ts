@@ -108,4 +108,29 @@ describe('SystemModel', () => {
     expect(first.some((q) => q > 0)).toBe(true);
     expect(second.every((q) => q === 0)).toBe(true);
   });
+
+  it('gives the same event values from its cached evaluation as from a fresh one, even when the evaluated array was reused since', () => {
+    const scenario = load('greenhouse-three-beds.json');
+    const cached = new SystemModel(scenario);
+    const fresh = new SystemModel(scenario);
+    const y = cached.initialState();
+    cached.transition(0, y, [], true);
+    fresh.transition(0, Float64Array.from(y), [], true);
+    const next = random(11);
+    const reused = new Float64Array(cached.stateSize);
+    const dy = new Float64Array(cached.stateSize);
+    const fromCache = new Float64Array(cached.eventCount);
+    const expected = new Float64Array(fresh.eventCount);
+    for (let trial = 0; trial < 20; trial += 1) {
+      const state = Float64Array.from(y);
+      for (const vessel of cached.parts.vessels)
+        state[vessel.index] = next() * vessel.geometry.rimVolumeM3;
+      reused.set(state);
+      cached.derivative(dy, reused, trial);
+      reused.fill(0); // the stepper reuses its stage arrays
+      cached.eventValues(fromCache, state, trial);
+      fresh.eventValues(expected, Float64Array.from(state), trial);
+      expect(Array.from(fromCache)).toEqual(Array.from(expected));
+    }
+  });
 });

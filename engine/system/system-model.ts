@@ -87,10 +87,16 @@ export class SystemModel implements HybridSystem {
   }
 
   eventValues(out: Float64Array, y: Float64Array, timeS: number): void {
-    let needsFlows = false;
-    for (const vessel of this.parts.vessels)
-      needsFlows = needsFlows || vessel.brimful || vessel.empty;
-    const ctx = needsFlows ? this.evaluate(y, timeS) : this.evaluateLevels(y, timeS);
+    let ctx: ModelContext;
+    if (this.cachedAt(y, timeS)) {
+      // The usual case after a step: its end was just evaluated for the derivative there.
+      ctx = this.ctx;
+    } else {
+      let needsFlows = false;
+      for (const vessel of this.parts.vessels)
+        needsFlows = needsFlows || vessel.brimful || vessel.empty;
+      ctx = needsFlows ? this.evaluate(y, timeS) : this.evaluateLevels(y, timeS);
+    }
     for (const component of this.parts.components) component.eventValues(ctx, out);
   }
 
@@ -112,13 +118,22 @@ export class SystemModel implements HybridSystem {
 
   /** Flows, levels and surfaces at (y, t); cached for repeated calls at the same point and modes. */
   flowsAt(y: Float64Array, timeS: number): ModelContext {
+    return this.cachedAt(y, timeS) ? this.ctx : this.evaluate(y, timeS);
+  }
+
+  /**
+   * Whether the context holds the evaluation of (y, t) in the current modes; if so, points it at
+   * `y` (the array it was computed from may have been reused since, with other values).
+   */
+  private cachedAt(y: Float64Array, timeS: number): boolean {
     if (
-      timeS === this.cachedTimeS &&
-      this.cachedVersion === this.modeVersion &&
-      sameValues(y, this.cachedState)
+      timeS !== this.cachedTimeS ||
+      this.cachedVersion !== this.modeVersion ||
+      !sameValues(y, this.cachedState)
     )
-      return this.ctx;
-    return this.evaluate(y, timeS);
+      return false;
+    this.ctx.state = y;
+    return true;
   }
 
   private settlingPass(timeS: number, y: Float64Array): boolean {
