@@ -4,9 +4,17 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { RunWithSnapshotSchema } from '../../shared/contracts/runs';
 import type { Scenario } from '../../shared/scenario/index';
 import { systems } from '../../server/db/schema';
-import { createRunsWorld, createSystem, runSystem, type RunsWorld } from './runs-support';
+import {
+  createRunsWorld,
+  createSystem,
+  runsTestTimeoutMs,
+  runSystem,
+  type RunsWorld,
+} from './runs-support';
 
-describe('runs of a calibrated system', () => {
+// The test waits for a real engine run in a worker thread: its timeout comes from the pool's
+// wall-time limit, not from a guess at how fast the machine is.
+describe('runs of a calibrated system', { timeout: runsTestTimeoutMs() }, () => {
   let w: RunsWorld;
   beforeEach(async () => {
     w = await createRunsWorld();

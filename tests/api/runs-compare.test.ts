@@ -16,11 +16,17 @@ import {
   createSystem,
   exampleScenario,
   pollRun,
+  runEndBoundMs,
+  runEnded,
+  runsTestTimeoutMs,
   runSystem,
   type RunsWorld,
 } from './runs-support';
 
-describe('runs across users and limits', () => {
+// Every test waits for real engine runs in a worker thread, so the timeout comes from the pool's
+// wall-time limit and the runs a test does one after another (at most two), not from a guess at how
+// fast the machine is.
+describe('runs across users and limits', { timeout: runsTestTimeoutMs(2) }, () => {
   let w: RunsWorld;
   afterEach(async () => {
     await w.close();
@@ -108,11 +114,7 @@ describe('runs across users and limits', () => {
     const started = RunStartedSchema.parse(
       (await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: '30 days' })).body,
     );
-    const run = await pollRun(
-      w.owner,
-      started.id,
-      (r) => r.status !== 'queued' && r.status !== 'running',
-    );
+    const run = await pollRun(w.owner, started.id, runEnded, runEndBoundMs(w.pool.options));
     expect(run.status).toBe('failed');
     expect(run.error).toMatch(/5 ms time limit/);
     expect(run.error).toMatch(/shorten the duration/);

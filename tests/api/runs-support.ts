@@ -20,10 +20,49 @@ export interface RunsWorld {
   close(): Promise<void>;
 }
 
+/** The pool settings of a runs world: the server's defaults for 2 cores, one worker, `overrides`. */
+export function runsWorldPoolOptions(overrides: Partial<RunPoolOptions> = {}): RunPoolOptions {
+  return { ...defaultRunPoolOptions(2), size: 1, ...overrides };
+}
+
+/**
+ * Time a fresh pool's worker thread may take to load the engine through tsx before it takes its
+ * first job, ms. Measured 1.3-2.1 s on the idle 2-core test machine and 3.7-5.1 s with both cores
+ * busy; 30 s leaves room for a machine loaded harder than that.
+ */
+const WORKER_START_ALLOWANCE_MS = 30_000;
+
+/**
+ * Time a test may spend on its requests and database work around the engine (sign-in, creating a
+ * system, storing a result with thousands of events, reading and downloading it), ms. Measured up
+ * to 14 s on the 2-core test machine with both cores busy; 30 s leaves room.
+ */
+const REQUESTS_ALLOWANCE_MS = 30_000;
+
+/**
+ * The longest one run can stay queued or running on an otherwise idle one-worker pool, ms: the
+ * worker's start, then the pool's wall-time limit (the engine stops there) and the grace period
+ * after which the pool ends the job itself. A run that has not ended by then is a defect.
+ */
+export function runEndBoundMs(options: RunPoolOptions = runsWorldPoolOptions()): number {
+  return WORKER_START_ALLOWANCE_MS + options.timeLimitMs + options.graceMs;
+}
+
+/**
+ * The vitest timeout of a runs-world test that runs the engine `runs` times one after another (each
+ * start answered 201 when the run ends, or polled): one worker start, each run's time limit and
+ * grace, and the requests around them. Larger than `runEndBoundMs`, so a poll that gives up reports
+ * the run's status before vitest's own timeout could hide it.
+ */
+export function runsTestTimeoutMs(runs = 1, overrides: Partial<RunPoolOptions> = {}): number {
+  const { timeLimitMs, graceMs } = runsWorldPoolOptions(overrides);
+  return WORKER_START_ALLOWANCE_MS + runs * (timeLimitMs + graceMs) + REQUESTS_ALLOWANCE_MS;
+}
+
 /** A fresh database, a one-worker pool (limits overridable) and a signed-in owner. */
 export async function createRunsWorld(pool: Partial<RunPoolOptions> = {}): Promise<RunsWorld> {
   const t = await createTestContext();
-  const runPool = new RunPool({ ...defaultRunPoolOptions(2), size: 1, ...pool });
+  const runPool = new RunPool(runsWorldPoolOptions(pool));
   const ctx = { ...t.ctx, runPool };
   const app = createApp(ctx);
   const { client, user } = await signedInClient(app, ctx, { name: 'Rita Runner' });
@@ -71,12 +110,18 @@ export async function runSystem(
   return RunSchema.parse(res.body);
 }
 
-/** Polls `GET /api/runs/:id` until `done(run)`; returns that run. */
+/** Whether a run has ended (completed, stopped, failed or cancelled). */
+export const runEnded = (run: Run): boolean => run.status !== 'queued' && run.status !== 'running';
+
+/**
+ * Polls `GET /api/runs/:id` until `done(run)`; returns that run. Gives up, naming the run's status,
+ * after `timeoutMs` (by default the longest a run of a default runs world can take).
+ */
 export async function pollRun(
   client: TestClient,
   runId: string,
   done: (run: Run) => boolean,
-  timeoutMs = 60_000,
+  timeoutMs = runEndBoundMs(),
 ): Promise<Run> {
   const end = Date.now() + timeoutMs;
   for (;;) {

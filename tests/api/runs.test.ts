@@ -22,11 +22,16 @@ import {
   createSystem,
   exampleScenario,
   pollRun,
+  runEnded,
+  runsTestTimeoutMs,
   runSystem,
   type RunsWorld,
 } from './runs-support';
 
-describe('runs API', () => {
+// Every test waits for real engine runs in a worker thread, so the timeout comes from the pool's
+// wall-time limit and the runs a test does one after another (at most three, when listing runs),
+// not from a guess at how fast the machine is.
+describe('runs API', { timeout: runsTestTimeoutMs(3) }, () => {
   let w: RunsWorld;
   beforeEach(async () => {
     w = await createRunsWorld();
@@ -212,12 +217,7 @@ describe('runs API', () => {
     const res = await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: '25 h' });
     expect(res.status).toBe(202);
     const started = RunStartedSchema.parse(res.body);
-    const ended = await pollRun(
-      w.owner,
-      started.id,
-      (r) => r.status !== 'queued' && r.status !== 'running',
-      120_000,
-    );
+    const ended = await pollRun(w.owner, started.id, runEnded);
     expect(ended).toMatchObject({ status: 'completed', progress: 1, durationS: 25 * 3600 });
   });
 
@@ -228,7 +228,8 @@ describe('runs API', () => {
     const system = SystemSchema.parse(created.body);
     const res = await w.owner.post(`/api/systems/${system.id}/runs`).send({ duration: '3 days' });
     const started = RunStartedSchema.parse(res.body);
-    const run = await pollRun(w.owner, started.id, (r) => r.status === 'completed', 120_000);
+    const run = await pollRun(w.owner, started.id, runEnded);
+    expect(run.status, run.error ?? '').toBe('completed');
     expect(run.eventCount).toBeGreaterThan(RUN_EVENTS_SHOWN);
     expect(run.events).toHaveLength(RUN_EVENTS_SHOWN);
     const file = RunResultFileSchema.parse(
