@@ -26,7 +26,11 @@ function submit(pool: RunPool, id: string, script: { mode: string; ms: number })
   return { ended, outcome: () => stored };
 }
 
-async function until(check: () => boolean, timeoutMs = 10_000): Promise<void> {
+/**
+ * Waits for `check` to hold. The default covers a worker thread's start through tsx: about 1-2 s
+ * on the idle 2-core test machine and up to 5 s with both cores busy.
+ */
+async function until(check: () => boolean, timeoutMs = 20_000): Promise<void> {
   const end = Date.now() + timeoutMs;
   while (!check()) {
     if (Date.now() > end) throw new Error('condition not met in time');
@@ -62,7 +66,9 @@ describe('RunPool', () => {
   });
 
   it('cancels a queued job at once and a running one through the shared stop flag', async () => {
-    pool = new RunPool(options(), SCRIPTED);
+    // The worker's own answer to the flag must come before the pool's kill, even when a loaded
+    // machine keeps the worker thread waiting for a core; cancel returns as soon as it answers.
+    pool = new RunPool(options({ graceMs: 10_000 }), SCRIPTED);
     const running = submit(pool, 'running', { mode: 'honour-stop', ms: 0 });
     const queued = submit(pool, 'queued', { mode: 'finish', ms: 10 });
     await until(() => pool?.status('running')?.state === 'running');

@@ -17,11 +17,28 @@ export async function ownerWithSystem(
   return { client, systemId: (res.body as { id: string }).id };
 }
 
+/**
+ * How long `waitForSweep` waits for a sweep of a few short cells by default, ms. A test waiting for
+ * such a sweep took up to 8 s on the idle 2-core test machine and up to 20 s with both cores busy;
+ * 60 s leaves room.
+ */
+export const SWEEP_WAIT_MS = 60_000;
+
+/**
+ * The vitest timeout of a sweeps test that waits for `sweeps` sweeps one after another: each
+ * sweep's wait, plus 30 s for the requests around them (sign-in, import, reading cells and runs).
+ * Larger than the waits, so a wait that gives up reports the sweep's progress before vitest's own
+ * timeout could hide it.
+ */
+export function sweepsTestTimeoutMs(sweeps = 1): number {
+  return sweeps * SWEEP_WAIT_MS + 30_000;
+}
+
 /** Polls `GET /api/sweeps/:id?cells=0` until the sweep has ended; then reads it with its cells. */
 export async function waitForSweep(
   client: TestClient,
   sweepId: string,
-  timeoutMs = 60_000,
+  timeoutMs = SWEEP_WAIT_MS,
 ): Promise<Sweep> {
   const deadline = Date.now() + timeoutMs;
   for (;;) {

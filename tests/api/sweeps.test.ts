@@ -13,9 +13,11 @@ import { createApp } from '../../server/app';
 import { closeSweepQueue } from '../../server/sweeps/sweep-queue';
 import { createTestContext, type TestContext } from '../../server/testing/test-context';
 import { oneBedSystem } from '../engine-analysis/one-bed-system';
-import { ownerWithSystem, waitForSweep } from './sweeps-support';
+import { ownerWithSystem, sweepsTestTimeoutMs, waitForSweep } from './sweeps-support';
 
-describe('the operating-window API', () => {
+// Tests wait for sweeps of real engine runs, so the timeout comes from the sweeps a test waits for
+// one after another (at most two, when listing), not from a guess at how fast the machine is.
+describe('the operating-window API', { timeout: sweepsTestTimeoutMs(2) }, () => {
   let t: TestContext;
   let app: Express;
   beforeEach(async () => {
