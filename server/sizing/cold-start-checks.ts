@@ -3,22 +3,22 @@ import { pumpReserves } from '../../engine/index';
 import type { SizingCheck } from '../../shared/contracts/sizing';
 import type { Scenario } from '../../shared/scenario/index';
 import type { RunResultParts } from '../runs/run-worker-messages';
-import { litres, metres, minutes, sizingCheck } from './check-words';
+import { sizingCheck, type CheckWords } from './check-words';
 
 const MASS_BALANCE = 'physics (mass balance)';
 
 /** Mass balance with no return flow: the water every fed bed takes at once against the source's reserve. */
-function reserveChecks(scenario: Scenario): SizingCheck[] {
+function reserveChecks(scenario: Scenario, words: CheckWords): SizingCheck[] {
   return pumpReserves(scenario).map((r) => {
     const short = r.floodVolumeM3 > r.aboveIntakeM3;
     const belowMin = r.aboveMinimumM3 !== null && r.floodVolumeM3 > r.aboveMinimumM3;
     const beds = r.bedIds.length > 0 ? r.bedIds.join(', ') : 'no bed';
     const detail =
-      `Filling ${beds} to the standpipe tops at once, with nothing draining back, takes ${litres(r.floodVolumeM3)} from ${r.sourceId}, ` +
-      `which holds ${litres(r.aboveIntakeM3)} above pump ${r.pumpId}'s intake` +
+      `Filling ${beds} to the standpipe tops at once, with nothing draining back, takes ${words.volume(r.floodVolumeM3)} from ${r.sourceId}, ` +
+      `which holds ${words.volume(r.aboveIntakeM3)} above pump ${r.pumpId}'s intake` +
       (r.aboveMinimumM3 === null
         ? '.'
-        : ` and ${litres(r.aboveMinimumM3)} above its fish-safe minimum.`) +
+        : ` and ${words.volume(r.aboveMinimumM3)} above its fish-safe minimum.`) +
       (short
         ? ' The pump would run dry: make the source bigger or start with more water.'
         : belowMin
@@ -40,9 +40,14 @@ function reserveChecks(scenario: Scenario): SizingCheck[] {
 
 /**
  * Checks of the cold-start run (`run`: every bed empty at the start, all pumps on): time each pump
- * ran dry, the lowest level of each vessel with a fish-safe minimum, and the mass-balance reserve.
+ * ran dry, the lowest level of each vessel with a fish-safe minimum, and the mass-balance reserve;
+ * numbers in the sentences in `words`' units.
  */
-export function coldStartChecks(scenario: Scenario, run: RunResultParts): SizingCheck[] {
+export function coldStartChecks(
+  scenario: Scenario,
+  run: RunResultParts,
+  words: CheckWords,
+): SizingCheck[] {
   const pumps = run.summary.pumps.map((p) => {
     const dry = p.dry_s ?? 0;
     return sizingCheck({
@@ -56,7 +61,7 @@ export function coldStartChecks(scenario: Scenario, run: RunResultParts): Sizing
       source: MASS_BALANCE,
       detail:
         dry > 0
-          ? `With every bed filling from empty, pump ${p.id} ran dry for ${minutes(dry)}.`
+          ? `With every bed filling from empty, pump ${p.id} ran dry for ${words.time(dry)}.`
           : `With every bed filling from empty, pump ${p.id} never ran dry.`,
     });
   });
@@ -75,9 +80,9 @@ export function coldStartChecks(scenario: Scenario, run: RunResultParts): Sizing
         limit: vessel.minLevel,
         unit: 'm',
         source: 'the fish-safe minimum level of the system',
-        detail: `While every bed filled from empty, ${vessel.id} fell to ${metres(low)} (fish-safe minimum ${metres(vessel.minLevel)})${below ? '.' : ', and stayed above it.'}`,
+        detail: `While every bed filled from empty, ${vessel.id} fell to ${words.length(low)} (fish-safe minimum ${words.length(vessel.minLevel)})${below ? '.' : ', and stayed above it.'}`,
       }),
     ];
   });
-  return [...reserveChecks(scenario), ...pumps, ...levels];
+  return [...reserveChecks(scenario, words), ...pumps, ...levels];
 }

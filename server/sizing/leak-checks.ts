@@ -2,7 +2,7 @@
 import type { SizingCheck } from '../../shared/contracts/sizing';
 import type { Pump, Scenario, Vessel } from '../../shared/scenario/index';
 import type { RunResultParts } from '../runs/run-worker-messages';
-import { metres, millimetres, minutes, sizingCheck } from './check-words';
+import { sizingCheck, type CheckWords } from './check-words';
 import { withLeak } from './what-if-scenarios';
 
 /** The leak opens this long into the run, s. */
@@ -63,14 +63,14 @@ function minimumReachedAfterS(run: RunResultParts, vesselId: string): number | n
   return event ? event.t_s - LEAK_START_S : null;
 }
 
-/** The check of one leak case from its run. */
-export function leakCheck(leak: LeakCase, run: RunResultParts): SizingCheck {
+/** The check of one leak case from its run, numbers in `words`' units. */
+export function leakCheck(leak: LeakCase, run: RunResultParts, words: CheckWords): SizingCheck {
   const { vessel } = leak;
   const lowest =
     run.summary.vessels.find((v) => v.id === vessel.id)?.minLevel_m ?? vessel.initialLevel;
   const reachedS = minimumReachedAfterS(run, vessel.id);
   const when =
-    reachedS === null ? '' : `, passing the minimum ${minutes(reachedS)} after the leak opened`;
+    reachedS === null ? '' : `, passing the minimum ${words.time(reachedS)} after the leak opened`;
   if (leak.kind === 'pump-line' && leak.pump) {
     const below = lowest < vessel.minLevel - 1e-6;
     return sizingCheck({
@@ -83,7 +83,7 @@ export function leakCheck(leak: LeakCase, run: RunResultParts): SizingCheck {
       unit: 'm',
       source: 'the fish-safe minimum level of the system',
       detail:
-        `A break in pump ${leak.pump.id}'s line (a hole the size of its ${millimetres(leak.diameterM)} bore at the intake, ${metres(leak.pump.intakeHeight)}) takes ${vessel.id} down to ${metres(lowest)}${when}; its fish-safe minimum is ${metres(vessel.minLevel)}.` +
+        `A break in pump ${leak.pump.id}'s line (a hole the size of its ${words.bore(leak.diameterM)} bore at the intake, ${words.length(leak.pump.intakeHeight)}) takes ${vessel.id} down to ${words.length(lowest)}${when}; its fish-safe minimum is ${words.length(vessel.minLevel)}.` +
         (below
           ? ' Raise the intake above the minimum, or drill an anti-siphon hole in the line just below the minimum level (common practice, no source).'
           : ''),
@@ -92,7 +92,7 @@ export function leakCheck(leak: LeakCase, run: RunResultParts): SizingCheck {
   return sizingCheck({
     check: 'tank-leak-time',
     subject: vessel.id,
-    title: `A ${millimetres(leak.diameterM)} hole at the floor of ${vessel.id}`,
+    title: `A ${words.bore(leak.diameterM)} hole at the floor of ${vessel.id}`,
     status: reachedS !== null && reachedS < LEAK_RESPONSE_S ? 'warning' : 'ok',
     value: reachedS,
     limit: LEAK_RESPONSE_S,
@@ -100,7 +100,7 @@ export function leakCheck(leak: LeakCase, run: RunResultParts): SizingCheck {
     source: 'common practice, no source (an hour to notice a leak and act)',
     detail:
       reachedS === null
-        ? `A ${millimetres(leak.diameterM)} hole at its floor does not take ${vessel.id} below its minimum within ${minutes(LEAK_WATCH_S)} (lowest ${metres(lowest)}).`
-        : `A ${millimetres(leak.diameterM)} hole at its floor takes ${vessel.id} below its fish-safe minimum of ${metres(vessel.minLevel)} ${minutes(reachedS)} after it opens. A level alarm above the minimum buys time.`,
+        ? `A ${words.bore(leak.diameterM)} hole at its floor does not take ${vessel.id} below its minimum within ${words.time(LEAK_WATCH_S)} (lowest ${words.length(lowest)}).`
+        : `A ${words.bore(leak.diameterM)} hole at its floor takes ${vessel.id} below its fish-safe minimum of ${words.length(vessel.minLevel)} ${words.time(reachedS)} after it opens. A level alarm above the minimum buys time.`,
   });
 }

@@ -2,7 +2,7 @@
 import { bedStructuralLoad, type BedStructuralLoad } from '../../engine/index';
 import type { BedLoad, SizingCheck } from '../../shared/contracts/sizing';
 import type { Scenario } from '../../shared/scenario/index';
-import { kilograms, sizingCheck } from './check-words';
+import { sizingCheck, type CheckWords } from './check-words';
 
 /**
  * Uniform live load residential floors are commonly designed for, Pa: 40 lb/ft² = 1.92 kPa (from
@@ -22,11 +22,13 @@ export function bedLoads(scenario: Scenario): BedLoad[] {
   );
 }
 
-/** One check per bed: its pressure on its footprint when full to the rim, against a home floor's design load. */
-export function loadChecks(loads: readonly BedLoad[]): SizingCheck[] {
+/**
+ * One check per bed: its pressure on its footprint when full to the rim, against a home floor's
+ * design load; numbers in `words`' units.
+ */
+export function loadChecks(loads: readonly BedLoad[], words: CheckWords): SizingCheck[] {
   return loads.map((load) => {
     const heavy = load.pressureAtRimPa > RESIDENTIAL_FLOOR_LOAD_PA;
-    const kPa = (pa: number): string => `${Number((pa / 1000).toPrecision(3))} kPa`;
     return sizingCheck({
       check: 'bed-load',
       subject: load.bedId,
@@ -38,10 +40,10 @@ export function loadChecks(loads: readonly BedLoad[]): SizingCheck[] {
       source:
         'from memory: ASCE 7 uniform live load of dwelling floors, 40 lb/ft²; media densities as listed',
       detail:
-        `Full to its rim (a blocked drain), ${load.bedId} weighs ${kilograms(load.totalAtRimKg)}: ${kilograms(load.wetMediaKg)} of wet media and ${kilograms(load.waterAtRimKg)} of water, ` +
-        `${kPa(load.pressureAtRimPa)} over its ${Number(load.footprintM2.toPrecision(3))} m² footprint (${kilograms(load.totalAtFloodKg)} at flood level). ` +
+        `Full to its rim (a blocked drain), ${load.bedId} weighs ${words.mass(load.totalAtRimKg)}: ${words.mass(load.wetMediaKg)} of wet media and ${words.mass(load.waterAtRimKg)} of water, ` +
+        `${words.pressure(load.pressureAtRimPa)} over its ${words.area(load.footprintM2)} footprint (${words.mass(load.totalAtFloodKg)} at flood level). ` +
         (heavy
-          ? `That is more than the ${kPa(RESIDENTIAL_FLOOR_LOAD_PA)} a home floor is commonly designed for. `
+          ? `That is more than the ${words.pressure(RESIDENTIAL_FLOOR_LOAD_PA)} a home floor is commonly designed for. `
           : '') +
         'Stands, decks and floors under beds need a check by a qualified person.',
     });

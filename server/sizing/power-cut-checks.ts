@@ -2,7 +2,7 @@
 import type { SizingCheck } from '../../shared/contracts/sizing';
 import type { Scenario } from '../../shared/scenario/index';
 import type { RunResultParts } from '../runs/run-worker-messages';
-import { litres, minutes, sizingCheck } from './check-words';
+import { sizingCheck, type CheckWords } from './check-words';
 
 /** Water lost below this counts as none, m³ (round-off of the volume balance). */
 const NONE_M3 = 1e-6;
@@ -20,20 +20,21 @@ export function powerCutMoment(coldStart: RunResultParts): { atS: number; when: 
   return { atS: 1800, when: 'half an hour into a cold start' };
 }
 
-const describeSpills = (run: RunResultParts, fromS: number): string[] =>
+const describeSpills = (run: RunResultParts, fromS: number, words: CheckWords): string[] =>
   run.events
     .filter((e) => e.t_s >= fromS && (e.kind === 'rim-overflow' || e.kind === 'overflow-start'))
-    .map((e) => `${e.where} at ${minutes(e.t_s)}`);
+    .map((e) => `${e.where} at ${words.time(e.t_s)}`);
 
 /** Water lost anywhere in the power-cut run, with the spills that began after the cut. */
 function lostWaterCheck(
   run: RunResultParts,
   cut: { atS: number; when: string },
   forS: number,
+  words: CheckWords,
 ): SizingCheck {
   const cutS = cut.atS;
   const lost = run.summary.vessels.reduce((sum, v) => sum + (v.lost_m3 ?? 0), 0);
-  const spills = describeSpills(run, cutS);
+  const spills = describeSpills(run, cutS, words);
   const spilled = lost > NONE_M3;
   return sizingCheck({
     check: 'power-cut-water-lost',
@@ -45,8 +46,8 @@ function lostWaterCheck(
     unit: 'm3',
     source: 'physics (mass balance)',
     detail:
-      `The power went off at ${minutes(cutS)}, ${cut.when}, for ${minutes(forS)}. ` +
-      (spilled ? `${litres(lost)} of water left the system` : 'No water left the system') +
+      `The power went off at ${words.time(cutS)}, ${cut.when}, for ${words.time(forS)}. ` +
+      (spilled ? `${words.volume(lost)} of water left the system` : 'No water left the system') +
       (spills.length > 0 ? `; overflows: ${spills.join(', ')}.` : '; nothing overflowed.'),
   });
 }
@@ -80,12 +81,16 @@ function restartCheck(scenario: Scenario, run: RunResultParts, onS: number): Siz
   });
 }
 
-/** The checks of the power-cut run: cut at `cut.atS` for `forS`, on again after. */
+/**
+ * The checks of the power-cut run: cut at `cut.atS` for `forS`, on again after; numbers in the
+ * sentences in `words`' units.
+ */
 export function powerCutChecks(
   scenario: Scenario,
   run: RunResultParts,
   cut: { atS: number; when: string },
   forS: number,
+  words: CheckWords,
 ): SizingCheck[] {
-  return [lostWaterCheck(run, cut, forS), restartCheck(scenario, run, cut.atS + forS)];
+  return [lostWaterCheck(run, cut, forS, words), restartCheck(scenario, run, cut.atS + forS)];
 }

@@ -4,15 +4,18 @@ import type { SizingCheck } from '../../shared/contracts/sizing';
 import type { Scenario, Vessel } from '../../shared/scenario/index';
 import type { RunResultParts } from '../runs/run-worker-messages';
 import { vesselVolumeM3 } from '../sweeps/sweep-parameter-handlers';
-import { litres, sizingCheck } from './check-words';
+import { sizingCheck, type CheckWords } from './check-words';
 
 /** Fewest and most floods an hour that count as usual (common practice, no source). */
 const CYCLES_PER_HOUR = { low: 1, high: 12 } as const;
 
 const sig = (x: number): string => Number(x.toPrecision(3)).toString();
 
-/** Grow-bed media volume against fish-tank volume: about 1:1 with direct return, up to 2:1 with a sump. */
-export function bedTankRatioCheck(scenario: Scenario): SizingCheck[] {
+/**
+ * Grow-bed media volume against fish-tank volume: about 1:1 with direct return, up to 2:1 with a
+ * sump; volumes in `words`' units.
+ */
+export function bedTankRatioCheck(scenario: Scenario, words: CheckWords): SizingCheck[] {
   const tanks = scenario.vessels.filter((v) => v.kind === 'tank');
   if (tanks.length === 0) return [];
   const beds = scenario.vessels.flatMap((v) =>
@@ -34,7 +37,7 @@ export function bedTankRatioCheck(scenario: Scenario): SizingCheck[] {
       unit: 'ratio',
       source:
         'common practice, no source (about 1:1 with the beds draining to the fish tank, up to 2:1 with a sump)',
-      detail: `The beds hold ${litres(bedM3)} of media against ${litres(tankM3)} of fish tank: ${sig(ratio)} to 1 (${withSump ? 'with' : 'without'} a sump, up to ${limit} to 1 is usual).`,
+      detail: `The beds hold ${words.volume(bedM3)} of media against ${words.volume(tankM3)} of fish tank: ${sig(ratio)} to 1 (${withSump ? 'with' : 'without'} a sump, up to ${limit} to 1 is usual).`,
     }),
   ];
 }

@@ -10,6 +10,7 @@ import type { Database } from '../db/database';
 import { badRequest } from '../http/http-error';
 import type { RunPool } from '../runs/run-pool';
 import { systemScenario } from '../sweeps/sweeps-service';
+import { checkWords } from './check-words';
 import { coldStartChecks } from './cold-start-checks';
 import { LEAK_START_S, leakCases, leakCheck } from './leak-checks';
 import { bedLoads, loadChecks } from './load-checks';
@@ -39,10 +40,10 @@ function readSetting(
   return parsed.value;
 }
 
-/** `GET /api/systems/:id/sizing`. */
+/** `GET /api/systems/:id/sizing`; the checks' sentences give numbers in `user.units`. */
 export async function sizingReport(
   deps: { db: Database; pool: RunPool },
-  user: Pick<SessionUser, 'id'>,
+  user: Pick<SessionUser, 'id' | 'units'>,
   systemId: string,
   query: { cutDuration?: string | undefined; leakDiameter?: string | undefined },
 ): Promise<SizingReport> {
@@ -71,14 +72,15 @@ export async function sizingReport(
     ...leaks.map((leak) => runWhatIf(deps.pool, 'leak', leak.scenario)),
   ]);
   const loads = bedLoads(scenario);
+  const words = checkWords(user.units);
   const checks = [
-    ...coldStartChecks(scenario, cold),
-    ...powerCutChecks(scenario, cutRun, cut, cutS),
-    ...leaks.flatMap((leak, k) => (leakRuns[k] ? [leakCheck(leak, leakRuns[k])] : [])),
-    ...bedTankRatioCheck(scenario),
+    ...coldStartChecks(scenario, cold, words),
+    ...powerCutChecks(scenario, cutRun, cut, cutS, words),
+    ...leaks.flatMap((leak, k) => (leakRuns[k] ? [leakCheck(leak, leakRuns[k], words)] : [])),
+    ...bedTankRatioCheck(scenario, words),
     ...turnoverChecks(scenario),
     ...cyclesPerHourChecks(scenario, design),
-    ...loadChecks(loads),
+    ...loadChecks(loads, words),
   ];
   return {
     systemId,

@@ -1,12 +1,14 @@
 /**
  * The sizing checks and the build sheet through the API with the real engine: the greenhouse
- * demonstration system, a one-bed system short of water, and the cut list's arithmetic.
+ * demonstration system (in metric and in US customary words), a one-bed system short of water, and
+ * the cut list's arithmetic.
  */
 import { readFileSync } from 'node:fs';
 import type { Express } from 'express';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { pumpDutyPoints } from '../../engine/index';
 import { ApiErrorSchema } from '../../shared/contracts/api-error';
+import { MeResponseSchema } from '../../shared/contracts/auth';
 import {
   BuildSheetSchema,
   SizingReportSchema,
@@ -111,6 +113,50 @@ describe('sizing checks and the build sheet', () => {
     expect(line.status).toBe('fails');
     expect(line.value).toBeCloseTo(0.05, 3);
     expect(find(checks, 'tank-leak-time', 'tank').title).toMatch(/5 mm hole/);
+  }, 120_000);
+
+  it('writes the checks in inches, gallons and pounds once the user picks US customary units, with the same verdicts and values', async () => {
+    const { client } = await signedInClient(app, t.ctx);
+    const id = await importSystem(client, GREENHOUSE);
+    const url = `/api/systems/${id}/sizing?leakDiameter=10%20mm`;
+    const metric = SizingReportSchema.parse((await client.get(url).expect(200)).body);
+    const me = await client.patch('/api/auth/me').send({ units: 'us' }).expect(200);
+    expect(MeResponseSchema.parse(me.body).user.units).toBe('us');
+    const us = SizingReportSchema.parse((await client.get(url).expect(200)).body);
+    // Exact definitions (NIST SP 811, appendix B): 1 in = 0.0254 m, 1 US gal = 231 in³, 1 lb = 0.45359237 kg.
+    const threeDigits = (x: number | null): string => Number((x ?? NaN).toPrecision(3)).toString();
+    const inches = (m: number | null) => `${threeDigits((m ?? NaN) / 0.0254)} in`;
+    const gallons = (m3: number | null) => `${threeDigits((m3 ?? NaN) / (231 * 0.0254 ** 3))} gal`;
+    const level = find(us.checks, 'cold-start-min-level', 'tank');
+    expect(level.detail).toContain(
+      `tank fell to ${inches(level.value)} (fish-safe minimum ${inches(level.limit)})`,
+    );
+    const reserve = find(us.checks, 'cold-start-reserve', 'sump-pump');
+    expect(reserve.detail).toContain(`takes ${gallons(reserve.value)} from sump`);
+    expect(find(us.checks, 'tank-leak-time', 'tank').title).toBe(
+      `A ${inches(0.01)} hole at the floor of tank`,
+    );
+    const north = us.loads.find((l) => l.bedId === 'bed-north');
+    expect(find(us.checks, 'bed-load', 'bed-north').detail).toContain(
+      `weighs ${threeDigits((north?.totalAtRimKg ?? NaN) / 0.45359237)} lb`,
+    );
+    for (const check of us.checks) {
+      expect(`${check.title} ${check.detail}`).not.toMatch(/\d (?:mm|m²|m|L|kg|kPa)(?=[\s.,;)]|$)/);
+    }
+    // The metric reader's sentences were in metres; everything but the words is the same.
+    expect(find(metric.checks, 'cold-start-min-level', 'tank').detail).toContain(
+      `tank fell to ${threeDigits(level.value)} m (fish-safe minimum ${threeDigits(level.limit)} m)`,
+    );
+    const withoutWords = (checks: readonly SizingCheck[]) =>
+      checks.map(({ check, subject, status, value, limit, unit }) => ({
+        check,
+        subject,
+        status,
+        value,
+        limit,
+        unit,
+      }));
+    expect(withoutWords(us.checks)).toEqual(withoutWords(metric.checks));
   }, 120_000);
 
   it('refuses a power cut longer than a day, naming the field', async () => {
