@@ -1,5 +1,5 @@
 import type { BellSiphonDrain, Drain, LossCoefficients } from '../../shared/scenario/index';
-import { SCENARIO_DEFAULTS } from '../../shared/scenario/index';
+import { SCENARIO_DEFAULTS } from '../../shared/scenario/scenario-defaults';
 import { darcyWeisbachHeadLossM } from '../hydraulics/darcy-weisbach-loss';
 import { flowForMonotoneHeadM3PerS } from '../hydraulics/flow-for-monotone-head';
 import { hazenWilliamsHeadLossM } from '../hydraulics/hazen-williams-loss';
